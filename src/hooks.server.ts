@@ -1,0 +1,68 @@
+import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
+import { sequence } from '@sveltejs/kit/hooks';
+import { lucia } from '$lib/server/auth';
+import { prepare } from '$lib/server/db';
+
+export const init: ServerInit = async () => {
+	await prepare();
+};
+
+const authenticate: Handle = async ({ event, resolve }) => {
+	const sessionId = event.cookies.get(lucia.sessionCookieName);
+	event.locals.user = null;
+	event.locals.session = null;
+	if (sessionId) {
+		const { session, user } = await lucia.validateSession(sessionId);
+		if (session && user?.active) {
+			event.locals.user = user;
+			event.locals.session = session;
+			if (session.fresh) {
+				const cookie = lucia.createSessionCookie(session.id);
+				event.cookies.set(cookie.name, cookie.value, { path: '/', ...cookie.attributes });
+			}
+		} else {
+			// A deactivated user's sessions end with the next request.
+			if (session) await lucia.invalidateUserSessions(session.userId);
+			const cookie = lucia.createBlankSessionCookie();
+			event.cookies.set(cookie.name, cookie.value, { path: '/', ...cookie.attributes });
+		}
+	}
+	return resolve(event);
+};
+
+const UNSAFE = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
+
+/** SvelteKit's CSRF check covers form content types only; this covers JSON and the rest. */
+const refuseCrossSite: Handle = async ({ event, resolve }) => {
+	if (UNSAFE.has(event.request.method)) {
+		const origin = event.request.headers.get('origin');
+		const fetchSite = event.request.headers.get('sec-fetch-site');
+		const crossOrigin = origin !== null && origin !== event.url.origin;
+		if (crossOrigin || fetchSite === 'cross-site') {
+			return new Response(JSON.stringify({ message: 'Cross-site requests are refused.' }), {
+				status: 403,
+				headers: { 'content-type': 'application/json' }
+			});
+		}
+	}
+	return resolve(event);
+};
+
+const secureHeaders: Handle = async ({ event, resolve }) => {
+	const response = await resolve(event);
+	response.headers.set('x-content-type-options', 'nosniff');
+	response.headers.set('referrer-policy', 'same-origin');
+	response.headers.set('x-frame-options', 'DENY');
+	return response;
+};
+
+export const handle = sequence(refuseCrossSite, authenticate, secureHeaders);
+
+export const handleError: HandleServerError = ({ error, event, status, message }) => {
+	const errorId = crypto.randomUUID().slice(0, 8);
+	if (status >= 500) {
+		console.error(`[${errorId}] ${event.request.method} ${event.url.pathname}`, error);
+		return { message: 'Something went wrong on our side.', errorId };
+	}
+	return { message };
+};

@@ -1,0 +1,9 @@
+import type { Actions, PageServerLoad } from './$types';
+import * as passwordLinks from '$lib/server/password-links';
+
+export const load = (({ params }) =>
+	passwordLinks.load(params.token, 'reset')) satisfies PageServerLoad;
+
+export const actions = {
+	default: (event) => passwordLinks.action(event, 'reset')
+} satisfies Actions;
