@@ -2,9 +2,11 @@ import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { lucia } from '$lib/server/auth';
 import { prepare } from '$lib/server/db';
+import * as framework from '$lib/server/framework';
 
 export const init: ServerInit = async () => {
 	await prepare();
+	await framework.ensureDefault();
 };
 
 const authenticate: Handle = async ({ event, resolve }) => {

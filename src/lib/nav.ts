@@ -7,9 +7,19 @@ export interface NavItem {
 
 /** Navigation by role; every link points at a page that role may open. */
 export const NAV: Record<RoleName, NavItem[]> = {
-	apprentice: [{ href: '/apprentice', label: 'My progress' }],
-	supervisor: [{ href: '/supervisor', label: 'My apprentices' }],
-	coordinator: [{ href: '/coordinator', label: 'Cohorts' }],
+	apprentice: [
+		{ href: '/apprentice', label: 'My progress' },
+		{ href: '/tasks', label: 'Tasks' }
+	],
+	supervisor: [
+		{ href: '/supervisor', label: 'My apprentices' },
+		{ href: '/tasks', label: 'Tasks' }
+	],
+	coordinator: [
+		{ href: '/coordinator', label: 'Cohorts' },
+		{ href: '/coordinator/frameworks', label: 'Framework' },
+		{ href: '/tasks', label: 'Tasks' }
+	],
 	admin: [{ href: '/admin', label: 'Users' }]
 };
 

@@ -30,7 +30,7 @@ export default async function setup(project: TestProject) {
 	const mailDir = path.join(dir, 'mail');
 	const mail = await startFakeSmtp({ port: 0, dir: mailDir });
 	const port = await freePort();
-	const baseUrl = `http://localhost:${port}`;
+	const baseUrl = `http://127.0.0.1:${port}`;
 	const env = {
 		...process.env,
 		NODE_ENV: 'production',
@@ -53,6 +53,11 @@ export default async function setup(project: TestProject) {
 	if (code !== 0) throw new Error('Seeding the demo data failed');
 
 	const server: ChildProcess = spawn(process.execPath, ['build'], { env, stdio: 'inherit' });
+	let stopping = false;
+	server.on('exit', (code, signal) => {
+		if (!stopping)
+			console.error(`The app server stopped during the tests (code ${code}, signal ${signal})`);
+	});
 	const deadline = Date.now() + 30_000;
 	for (;;) {
 		try {
@@ -70,6 +75,7 @@ export default async function setup(project: TestProject) {
 	project.provide('databasePath', env.DATABASE_URL);
 
 	return async () => {
+		stopping = true;
 		server.kill('SIGTERM');
 		await mail.close();
 	};

@@ -98,6 +98,44 @@ describe('refusals', () => {
 		expect(json.status).toBe(403);
 	});
 
+	it('answers oversized and missing fields with a 400 and a message, never a 500', async () => {
+		const base = inject('baseUrl');
+		const post = (path: string, body: string) =>
+			fetch(`${base}${path}`, {
+				method: 'POST',
+				headers: {
+					origin: base,
+					accept: 'text/html',
+					'content-type': 'application/x-www-form-urlencoded'
+				},
+				body
+			});
+		const huge = await post(
+			'/login',
+			`email=${'a'.repeat(5000)}%40x.example&password=${'p'.repeat(5000)}`
+		);
+		expect(huge.status).toBe(400);
+		expect(await huge.text()).toMatch(/too long|at most 128/);
+		const missing = await post('/login', '');
+		expect(missing.status).toBe(400);
+		expect(await missing.text()).toMatch(/Enter your e-mail address/);
+		const forgot = await post('/forgot', 'email=not-an-address');
+		expect(forgot.status).toBe(400);
+	});
+
+	it('answers unknown and malformed invitation and reset links with 404', async () => {
+		const base = inject('baseUrl');
+		for (const path of [
+			'/welcome/not-a-token',
+			`/reset/${'A'.repeat(43)}`,
+			'/welcome/..%2F..%2Fetc'
+		]) {
+			const response = await fetch(`${base}${path}`);
+			expect(response.status).toBe(404);
+			expect(await response.text()).toMatch(/not valid/);
+		}
+	});
+
 	it('answers health with {"ok":true}', async () => {
 		const response = await fetch(`${inject('baseUrl')}/api/health`);
 		expect(response.status).toBe(200);

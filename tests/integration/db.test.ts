@@ -2,6 +2,7 @@ import { Op, QueryTypes } from 'sequelize';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { LoginThrottle, prepare, sequelize, Site, write } from '$lib/server/db';
 import { BUSY_TIMEOUT_MS } from '$lib/server/db/connection';
+import { migrations } from '$lib/server/db/migrations';
 
 beforeAll(() => prepare());
 
@@ -21,8 +22,9 @@ describe('database', () => {
 
 	it('applies migrations once and records them', async () => {
 		await prepare();
-		const [rows] = await sequelize.query('SELECT name FROM schema_migrations');
-		expect(rows).toEqual([{ name: '2026-12-02-01-foundation' }]);
+		const [rows] = await sequelize.query('SELECT name FROM schema_migrations ORDER BY name');
+		expect(rows).toEqual(migrations.map((m) => ({ name: m.name })));
+		expect(migrations[0].name).toBe('2026-12-02-01-foundation');
 	});
 
 	it('refuses a row that points at nothing', async () => {

@@ -1,9 +1,13 @@
 import type { QueryInterface } from 'sequelize';
 import * as foundation from './2026-12-02-01-foundation';
+import * as framework from './2026-12-02-02-framework';
+import * as workLog from './2026-12-02-03-work-log';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
 /** Every migration, in order. Listed by hand because a bundled server cannot glob. */
 export const migrations: { name: string; up: Step; down: Step }[] = [
-	{ name: '2026-12-02-01-foundation', ...foundation }
+	{ name: '2026-12-02-01-foundation', ...foundation },
+	{ name: '2026-12-02-02-framework', ...framework },
+	{ name: '2026-12-02-03-work-log', ...workLog }
 ];

@@ -1,17 +1,37 @@
 import type { Sequelize } from 'sequelize';
 import { ApprenticeProfile } from './ApprenticeProfile';
+import { Area } from './Area';
 import { Cohort } from './Cohort';
+import { Evidence } from './Evidence';
+import { Framework } from './Framework';
+import { LogEntry } from './LogEntry';
+import { LogEntryTask } from './LogEntryTask';
 import { LoginThrottle } from './LoginThrottle';
 import { Programme } from './Programme';
+import { RtiRecord } from './RtiRecord';
 import { Session } from './Session';
 import { Site } from './Site';
 import { SupervisorProfile } from './SupervisorProfile';
+import { Task } from './Task';
+import { TaskQuestion } from './TaskQuestion';
+import { TaskSpec } from './TaskSpec';
+import { TaskStep } from './TaskStep';
 import { Supervision } from './Supervision';
 import { User } from './User';
 import { UserToken } from './UserToken';
 
 export {
+	Evidence,
+	LogEntry,
+	LogEntryTask,
+	RtiRecord,
 	ApprenticeProfile,
+	Area,
+	Framework,
+	Task,
+	TaskQuestion,
+	TaskSpec,
+	TaskStep,
 	Cohort,
 	LoginThrottle,
 	Programme,
@@ -24,6 +44,9 @@ export {
 };
 export type { Role } from './User';
 export { ROLES } from './User';
+export type { FrameworkStatus } from './Framework';
+export type { EntryStatus } from './LogEntry';
+export type { RtiResult } from './RtiRecord';
 
 /** Initialises every model on one Sequelize instance, then wires the associations. */
 export function initModels(sequelize: Sequelize) {
@@ -37,7 +60,17 @@ export function initModels(sequelize: Sequelize) {
 		SupervisorProfile,
 		Supervision,
 		UserToken,
-		LoginThrottle
+		LoginThrottle,
+		Framework,
+		Area,
+		Task,
+		TaskStep,
+		TaskSpec,
+		TaskQuestion,
+		LogEntry,
+		LogEntryTask,
+		Evidence,
+		RtiRecord
 	]) {
 		model.initModel(sequelize);
 	}
@@ -55,4 +88,29 @@ export function initModels(sequelize: Sequelize) {
 	Supervision.belongsTo(User, { foreignKey: 'apprenticeId', as: 'apprentice' });
 	Supervision.belongsTo(User, { foreignKey: 'supervisorId', as: 'supervisor' });
 	UserToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+
+	Framework.belongsTo(Framework, { foreignKey: 'basedOnId', as: 'basedOn' });
+	Framework.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+	Framework.hasMany(Area, { foreignKey: 'frameworkId', as: 'areas' });
+	Area.belongsTo(Framework, { foreignKey: 'frameworkId', as: 'framework' });
+	Area.hasMany(Task, { foreignKey: 'areaId', as: 'tasks' });
+	Task.belongsTo(Area, { foreignKey: 'areaId', as: 'area' });
+	Task.belongsTo(Framework, { foreignKey: 'frameworkId', as: 'framework' });
+	Task.hasMany(TaskStep, { foreignKey: 'taskId', as: 'steps' });
+	Task.hasMany(TaskSpec, { foreignKey: 'taskId', as: 'specs' });
+	Task.hasMany(TaskQuestion, { foreignKey: 'taskId', as: 'questions' });
+
+	LogEntry.belongsTo(User, { foreignKey: 'apprenticeId', as: 'apprentice' });
+	LogEntry.belongsTo(User, { foreignKey: 'supervisorId', as: 'supervisor' });
+	LogEntry.belongsTo(User, { foreignKey: 'reviewedById', as: 'reviewedBy' });
+	LogEntry.belongsTo(LogEntry, { foreignKey: 'correctsId', as: 'corrects' });
+	LogEntry.hasMany(LogEntryTask, { foreignKey: 'entryId', as: 'tasks', onDelete: 'CASCADE' });
+	LogEntryTask.belongsTo(LogEntry, { foreignKey: 'entryId', as: 'entry' });
+	LogEntryTask.belongsTo(Task, { foreignKey: 'taskId', as: 'task' });
+	LogEntry.hasMany(Evidence, { foreignKey: 'entryId', as: 'evidence', onDelete: 'CASCADE' });
+	Evidence.belongsTo(LogEntry, { foreignKey: 'entryId', as: 'entry' });
+	Evidence.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
+	RtiRecord.belongsTo(User, { foreignKey: 'apprenticeId', as: 'apprentice' });
+	RtiRecord.belongsTo(User, { foreignKey: 'enteredById', as: 'enteredBy' });
+	RtiRecord.belongsTo(User, { foreignKey: 'confirmedById', as: 'confirmedBy' });
 }
