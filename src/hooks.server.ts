@@ -3,10 +3,12 @@ import { sequence } from '@sveltejs/kit/hooks';
 import { lucia } from '$lib/server/auth';
 import { prepare } from '$lib/server/db';
 import * as framework from '$lib/server/framework';
+import { startDailyJobs } from '$lib/server/schedule';
 
 export const init: ServerInit = async () => {
 	await prepare();
 	await framework.ensureDefault();
+	if (process.env.DAILY_JOBS !== 'off') startDailyJobs();
 };
 
 const authenticate: Handle = async ({ event, resolve }) => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { inviteSchema, loginSchema, newPasswordSchema } from '$lib/schemas/account';
-import { keepValues, parseForm } from '$lib/schemas/forms';
+import { formToObject, keepValues, parseForm } from '$lib/schemas/forms';
 
 const form = (entries: Record<string, string>) => {
 	const data = new FormData();
@@ -56,5 +56,23 @@ describe('form validation', () => {
 		).toEqual({
 			email: 'a@b.example'
 		});
+	});
+});
+
+describe('nested form fields', () => {
+	it('turns dotted names into arrays and objects', () => {
+		expect(
+			formToObject(
+				form({ 'tasks.0.taskId': '4', 'tasks.0.hours': '1.5', 'tasks.1.taskId': '9', note: 'x' })
+			)
+		).toEqual({ tasks: [{ taskId: '4', hours: '1.5' }, { taskId: '9' }], note: 'x' });
+	});
+
+	it('ignores prototype keys and huge indexes', () => {
+		const result = formToObject(
+			form({ '__proto__.admin': 'yes', 'tasks.9999.hours': '1', 'a.constructor.x': '1' })
+		);
+		expect(result).toEqual({});
+		expect(({} as Record<string, unknown>).admin).toBeUndefined();
 	});
 });

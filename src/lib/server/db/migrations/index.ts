@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize';
 import * as foundation from './2026-12-02-01-foundation';
 import * as framework from './2026-12-02-02-framework';
 import * as workLog from './2026-12-02-03-work-log';
+import * as reviewDigests from './2026-12-02-04-review-digests';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -9,5 +10,6 @@ type Step = (params: { context: QueryInterface }) => Promise<void>;
 export const migrations: { name: string; up: Step; down: Step }[] = [
 	{ name: '2026-12-02-01-foundation', ...foundation },
 	{ name: '2026-12-02-02-framework', ...framework },
-	{ name: '2026-12-02-03-work-log', ...workLog }
+	{ name: '2026-12-02-03-work-log', ...workLog },
+	{ name: '2026-12-02-04-review-digests', ...reviewDigests }
 ];
