@@ -2,11 +2,22 @@
 import { prepare, sequelize } from '../src/lib/server/db';
 import { ensureDefault } from '../src/lib/server/framework';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from './demo';
+import { seedWorkLog } from './worklog';
 
 try {
 	await prepare();
 	await ensureDefault();
 	const result = await seedDemo();
+	// Only a fresh demo gets history, so running the seed again never duplicates it.
+	if (result === 'seeded') {
+		const started = Date.now();
+		const log = await seedWorkLog();
+		if (log !== 'already seeded') {
+			console.log(
+				`Work log: ${log.entries} entries, ${log.tasks} task splits, ${log.rti} instruction records (${Date.now() - started} ms).`
+			);
+		}
+	}
 	console.log(`Demo data ${result}. Sign in with any of these (password "${DEMO_PASSWORD}"):`);
 	for (const a of DEMO_ACCOUNTS) console.log(`  ${a.role.padEnd(12)} ${a.email}`);
 } catch (err) {

@@ -1,5 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
 import type { EntryInput } from '$lib/schemas/worklog';
+import * as audit from '../audit';
 import type { SignedInUser } from '../auth';
 import {
 	ApprenticeProfile,
@@ -235,6 +236,17 @@ export async function verify(user: SignedInUser, ids: number[]): Promise<ReviewR
 					},
 					{ transaction }
 				);
+				await audit.append(transaction, {
+					kind: 'hours.verified',
+					subject: `log-entry:${id}`,
+					actorId: user.id,
+					content: {
+						apprenticeId: entry.apprenticeId,
+						workDate: entry.workDate,
+						tenths: entry.tenths,
+						repairOrder: entry.repairOrder
+					}
+				});
 				result.verified.push(id);
 			}
 		}
@@ -262,6 +274,12 @@ export async function giveBack(user: SignedInUser, id: number, comment: string):
 			{ status: 'returned', returnComment: comment, reviewedAt: new Date(), reviewedById: user.id },
 			{ transaction }
 		);
+		await audit.append(transaction, {
+			kind: 'hours.returned',
+			subject: `log-entry:${id}`,
+			actorId: user.id,
+			content: { apprenticeId: entry.apprenticeId, comment }
+		});
 		return entry as LogEntry & { apprentice: User };
 	});
 	await mail.send({

@@ -3,6 +3,7 @@ import * as foundation from './2026-12-02-01-foundation';
 import * as framework from './2026-12-02-02-framework';
 import * as workLog from './2026-12-02-03-work-log';
 import * as reviewDigests from './2026-12-02-04-review-digests';
+import * as assessment from './2026-12-02-05-assessment';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -11,5 +12,6 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
 	{ name: '2026-12-02-01-foundation', ...foundation },
 	{ name: '2026-12-02-02-framework', ...framework },
 	{ name: '2026-12-02-03-work-log', ...workLog },
-	{ name: '2026-12-02-04-review-digests', ...reviewDigests }
+	{ name: '2026-12-02-04-review-digests', ...reviewDigests },
+	{ name: '2026-12-02-05-assessment', ...assessment }
 ];

@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { ApprenticeProfile } from './ApprenticeProfile';
 import { Area } from './Area';
+import { AuditEvent } from './AuditEvent';
 import { Cohort } from './Cohort';
 import { Evidence } from './Evidence';
 import { Framework } from './Framework';
@@ -8,8 +9,11 @@ import { LogEntry } from './LogEntry';
 import { LogEntryTask } from './LogEntryTask';
 import { LoginThrottle } from './LoginThrottle';
 import { Programme } from './Programme';
+import { QuizAttempt } from './QuizAttempt';
+import { QuizResponse } from './QuizResponse';
 import { RtiRecord } from './RtiRecord';
 import { Session } from './Session';
+import { SignOff } from './SignOff';
 import { Site } from './Site';
 import { SupervisorProfile } from './SupervisorProfile';
 import { Task } from './Task';
@@ -21,6 +25,10 @@ import { User } from './User';
 import { UserToken } from './UserToken';
 
 export {
+	AuditEvent,
+	QuizAttempt,
+	QuizResponse,
+	SignOff,
 	Evidence,
 	LogEntry,
 	LogEntryTask,
@@ -46,7 +54,10 @@ export type { Role } from './User';
 export { ROLES } from './User';
 export type { FrameworkStatus } from './Framework';
 export type { EntryStatus } from './LogEntry';
+export { ENTRY_STATUSES } from './LogEntry';
 export type { RtiResult } from './RtiRecord';
+export type { SignOffKind, StepResult } from './SignOff';
+export type { DrawnQuestion } from './QuizAttempt';
 
 /** Initialises every model on one Sequelize instance, then wires the associations. */
 export function initModels(sequelize: Sequelize) {
@@ -70,7 +81,11 @@ export function initModels(sequelize: Sequelize) {
 		LogEntry,
 		LogEntryTask,
 		Evidence,
-		RtiRecord
+		RtiRecord,
+		QuizAttempt,
+		QuizResponse,
+		SignOff,
+		AuditEvent
 	]) {
 		model.initModel(sequelize);
 	}
@@ -113,4 +128,16 @@ export function initModels(sequelize: Sequelize) {
 	RtiRecord.belongsTo(User, { foreignKey: 'apprenticeId', as: 'apprentice' });
 	RtiRecord.belongsTo(User, { foreignKey: 'enteredById', as: 'enteredBy' });
 	RtiRecord.belongsTo(User, { foreignKey: 'confirmedById', as: 'confirmedBy' });
+
+	QuizAttempt.belongsTo(User, { foreignKey: 'apprenticeId', as: 'apprentice' });
+	QuizAttempt.belongsTo(Task, { foreignKey: 'taskId', as: 'task' });
+	QuizAttempt.hasMany(QuizResponse, { foreignKey: 'attemptId', as: 'responses' });
+	QuizResponse.belongsTo(QuizAttempt, { foreignKey: 'attemptId', as: 'attempt' });
+	QuizResponse.belongsTo(TaskQuestion, { foreignKey: 'questionId', as: 'question' });
+	SignOff.belongsTo(User, { foreignKey: 'apprenticeId', as: 'apprentice' });
+	SignOff.belongsTo(User, { foreignKey: 'supervisorId', as: 'supervisor' });
+	SignOff.belongsTo(Task, { foreignKey: 'taskId', as: 'task' });
+	SignOff.belongsTo(Framework, { foreignKey: 'frameworkId', as: 'framework' });
+	SignOff.belongsTo(QuizAttempt, { foreignKey: 'quizAttemptId', as: 'quizAttempt' });
+	SignOff.belongsTo(SignOff, { foreignKey: 'refersToId', as: 'refersTo' });
 }
