@@ -9,18 +9,26 @@ export interface NavItem {
 export const NAV: Record<RoleName, NavItem[]> = {
 	apprentice: [
 		{ href: '/apprentice', label: 'My progress' },
+		{ href: '/apprentice/log', label: 'My log' },
+		{ href: '/apprentice/rti', label: 'Instruction' },
+		{ href: '/apprentice/matrix', label: 'My matrix' },
 		{ href: '/tasks', label: 'Tasks' }
 	],
 	supervisor: [
 		{ href: '/supervisor', label: 'My apprentices' },
+		{ href: '/supervisor/queue', label: 'Review' },
 		{ href: '/tasks', label: 'Tasks' }
 	],
 	coordinator: [
 		{ href: '/coordinator', label: 'Cohorts' },
 		{ href: '/coordinator/frameworks', label: 'Framework' },
+		{ href: '/coordinator/rti', label: 'Instruction' },
 		{ href: '/tasks', label: 'Tasks' }
 	],
-	admin: [{ href: '/admin', label: 'Users' }]
+	admin: [
+		{ href: '/admin', label: 'Users' },
+		{ href: '/admin/audit', label: 'Audit trail' }
+	]
 };
 
 export const ROLE_LABEL: Record<RoleName, string> = {

@@ -25,7 +25,7 @@ export interface QuestionOptionDef {
 
 export interface QuestionDef {
 	prompt: string;
-	/** Two to five options; one correct makes a single-answer question, more makes multiple-answer. */
+	/** Two to six options; one correct makes a single-answer question, more makes multiple-answer. */
 	options: QuestionOptionDef[];
 	/** Shown after the attempt: why the right answer is right. */
 	explanation: string;

@@ -240,7 +240,9 @@ export async function replaceDraft(frameworkId: number, def: FrameworkDef): Prom
 			);
 		}
 		await Area.destroy({ where: { frameworkId }, transaction });
-		await framework.update({ name: def.name }, { transaction });
+		// The name ties versions together (publishing retires the same name), so a draft keeps it.
+		await framework.changed('updatedAt', true);
+		await framework.save({ transaction });
 		await fill(frameworkId, def.areas, transaction);
 	});
 }
