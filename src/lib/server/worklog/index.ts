@@ -31,7 +31,7 @@ export {
 
 type Intent = 'draft' | 'submit';
 
-/** Checks an entry against the log rules and returns the row to store and its task split. */
+/** Checks an entry against the log rules (a correction is not compared with the entry it replaces). */
 async function prepare(
 	apprenticeId: string,
 	input: EntryInput,
@@ -138,7 +138,7 @@ export async function create(
 				});
 			}
 		}
-		const { row, splits } = await prepare(user.id, input, transaction);
+		const { row, splits } = await prepare(user.id, input, transaction, correctsId);
 		const entry = await LogEntry.create(
 			{
 				...row,
