@@ -1,4 +1,5 @@
 import { execFileSync } from 'node:child_process';
+import sharp from 'sharp';
 import { beforeAll, describe, expect, it } from 'vitest';
 import * as assessment from '$lib/server/assessment';
 import { GENESIS } from '$lib/server/assessment/chain';
@@ -11,6 +12,7 @@ import {
 	QuizAttempt,
 	sequelize,
 	SignOff,
+	SignOffPhoto,
 	Supervision,
 	Task,
 	TaskQuestion,
@@ -239,12 +241,43 @@ describe('sign-off', () => {
 		expect(history.map((h) => h.kind)).toEqual(['sign-off', 'revocation']);
 	});
 
+	it('a photo taken at the assessment is stored without metadata and signed by its hash', async () => {
+		const jpeg = await sharp({
+			create: { width: 64, height: 48, channels: 3, background: '#c05020' }
+		})
+			.jpeg()
+			.toBuffer();
+		const pdf = Buffer.from('%PDF-1.4\n1 0 obj<<>>endobj\ntrailer<<>>\n%%EOF\n');
+		const before = await SignOff.count();
+		const refused = await refusal(
+			assessment.signOff(supervisor, await input(), 's', [{ bytes: pdf, name: 'report.pdf' }])
+		);
+		expect(refused.errors.photos).toBeTruthy();
+		expect(await SignOff.count()).toBe(before);
+
+		const done = await assessment.signOff(supervisor, await input(), 'session-c', [
+			{ bytes: jpeg, name: 'bay3.jpg' }
+		]);
+		expect(done.photos).toBe(1);
+		const photo = await SignOffPhoto.findOne({
+			where: { signOffId: done.id },
+			rejectOnEmpty: true
+		});
+		const event = await AuditEvent.findOne({
+			where: { subject: `sign-off:${done.id}` },
+			rejectOnEmpty: true
+		});
+		expect(JSON.parse(event.content).photos).toEqual([photo.sha256]);
+		const stored = await worklog.evidenceStorage().get(photo.storageKey);
+		expect((await sharp(stored!).metadata()).exif).toBeUndefined();
+	});
+
 	it('the matrix shows every task with hours and levels', async () => {
 		const cells = await assessment.matrix(apprentice.id);
 		expect(cells.length).toBeGreaterThanOrEqual(120);
 		const brk = cells.find((c) => c.code === 'BRK-01')!;
 		expect(brk.verifiedTenths).toBe(Math.round(task.minHours * 10));
-		expect(brk.level).toBeNull();
+		expect(brk.level).toBe(3);
 	});
 
 	it('a sign-off request e-mails the journeyworker', async () => {

@@ -10,7 +10,11 @@ const schema = z.object({
 	FAKE_MAIL_DIR: z.string().optional(),
 	UPLOADS_DIR: z.string().default('data/uploads'),
 	KEYS_DIR: z.string().default('data/keys'),
-	NODE_ENV: z.string().default('development')
+	NODE_ENV: z.string().default('development'),
+	QUIZ_QUESTIONS: z.coerce.number().int().min(1).max(50).default(5),
+	QUIZ_PASS_MARK: z.coerce.number().int().min(1).max(100).default(80),
+	QUIZ_RETAKE_WAIT_HOURS: z.coerce.number().min(0).max(720).default(12),
+	QUIZ_TIME_LIMIT_MINUTES: z.coerce.number().int().min(1).max(240).default(30)
 });
 
 export type Config = z.infer<typeof schema> & { databasePath: string };

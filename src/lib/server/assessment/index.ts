@@ -1,12 +1,14 @@
-import { createHash } from 'node:crypto';
+import { createHash, randomUUID } from 'node:crypto';
 import { QueryTypes, type Transaction } from 'sequelize';
 import * as audit from '../audit';
 import type { SignedInUser } from '../auth';
+import { config } from '../config';
 import {
 	QuizAttempt,
 	QuizResponse,
 	sequelize,
 	SignOff,
+	SignOffPhoto,
 	SupervisorProfile,
 	Task,
 	TaskQuestion,
@@ -17,19 +19,21 @@ import {
 } from '../db';
 import * as framework from '../framework';
 import * as mail from '../mail';
+import { processUpload } from '../evidence';
 import { verifyPassword } from '../password';
+import { storage as evidenceStorage } from '../worklog/evidence';
 import { EntryProblem } from '../worklog/errors';
 import { supervises } from '../worklog/access';
 import { signatureDigest, signOffProblems } from './gates';
 import { itemStatistics } from './item-stats';
 import { drawAttempt, forBrowser, QuizTampered, score } from './quiz';
 
-/** Knowledge-check settings (common practice, no published source); editable per programme later. */
+/** Knowledge-check settings from the environment; defaults are common practice, no published source. */
 export const QUIZ = {
-	questions: 5,
-	passMark: 80,
-	retakeWaitHours: 12,
-	timeLimitMinutes: 30
+	questions: config.QUIZ_QUESTIONS,
+	passMark: config.QUIZ_PASS_MARK,
+	retakeWaitHours: config.QUIZ_RETAKE_WAIT_HOURS,
+	timeLimitMinutes: config.QUIZ_TIME_LIMIT_MINUTES
 } as const;
 
 const problem = (status: 400 | 403 | 404 | 409 | 429, form: string) =>
@@ -176,7 +180,19 @@ export interface SignOffInput {
 }
 
 /** The journeyworker's e-signed assessment, refused with every unmet gate listed. */
-export async function signOff(user: SignedInUser, input: SignOffInput, sessionId: string) {
+export interface PhotoUpload {
+	bytes: Uint8Array;
+	name: string;
+}
+
+export const MAX_SIGN_OFF_PHOTOS = 4;
+
+export async function signOff(
+	user: SignedInUser,
+	input: SignOffInput,
+	sessionId: string,
+	photos: PhotoUpload[] = []
+) {
 	if (user.role !== 'supervisor') throw problem(403, 'Only journeyworkers sign tasks off.');
 	const account = await User.findByPk(user.id, { attributes: ['passwordHash'] });
 	if (!account?.passwordHash || !(await verifyPassword(account.passwordHash, input.password))) {
@@ -205,6 +221,16 @@ export async function signOff(user: SignedInUser, input: SignOffInput, sessionId
 		selfSignOff: user.id === input.apprenticeId
 	});
 	if (Object.keys(errors).length) throw new EntryProblem(400, errors);
+	if (photos.length > MAX_SIGN_OFF_PHOTOS) {
+		throw new EntryProblem(400, { photos: `Attach at most ${MAX_SIGN_OFF_PHOTOS} photos.` });
+	}
+	const processed = [];
+	for (const photo of photos) {
+		const result = await processUpload(photo.bytes, photo.name);
+		if (!result.ok) throw new EntryProblem(result.status, { photos: result.message });
+		if (result.kind !== 'image') throw new EntryProblem(415, { photos: 'Attach photos only.' });
+		processed.push({ ...result, sha256: createHash('sha256').update(result.bytes).digest('hex') });
+	}
 
 	const signedAt = new Date();
 	const sessionHash = createHash('sha256').update(sessionId).digest('hex');
@@ -218,8 +244,27 @@ export async function signOff(user: SignedInUser, input: SignOffInput, sessionId
 		verifiedTenths: tenths,
 		quizAttemptId: pass!.id,
 		signedAt: signedAt.toISOString(),
-		sessionHash
+		sessionHash,
+		photos: processed.map((p) => p.sha256)
 	};
+	const store = evidenceStorage();
+	const stored = await Promise.all(
+		processed.map(async (p) => {
+			const storageKey = `sign-offs/${randomUUID()}`;
+			const thumbnailKey = p.thumbnail ? `thumbs/${randomUUID()}` : null;
+			await store.put(storageKey, p.bytes, p.mime);
+			if (thumbnailKey && p.thumbnail) await store.put(thumbnailKey, p.thumbnail, 'image/webp');
+			return { storageKey, thumbnailKey, mime: p.mime, bytes: p.bytes.length, sha256: p.sha256 };
+		})
+	);
+	const removeStored = () =>
+		Promise.all(
+			stored.flatMap((p) => [
+				store.delete(p.storageKey),
+				...(p.thumbnailKey ? [store.delete(p.thumbnailKey)] : [])
+			])
+		);
+	// Nothing half-stored: the photo files go again when the sign-off is refused.
 	const record = await write(async (transaction) => {
 		const current = await currentLevels(input.apprenticeId, transaction);
 		const held = current.get(task.code);
@@ -249,6 +294,10 @@ export async function signOff(user: SignedInUser, input: SignOffInput, sessionId
 			},
 			{ transaction }
 		);
+		await SignOffPhoto.bulkCreate(
+			stored.map((p) => ({ ...p, signOffId: row.id })),
+			{ transaction }
+		);
 		await audit.append(transaction, {
 			kind: 'sign-off.made',
 			subject: `sign-off:${row.id}`,
@@ -256,11 +305,15 @@ export async function signOff(user: SignedInUser, input: SignOffInput, sessionId
 			content: { ...content, contentHash: row.contentHash }
 		});
 		return row;
+	}).catch(async (err) => {
+		await removeStored();
+		throw err;
 	});
 	return {
 		id: record.id,
 		contentHash: record.contentHash,
-		signedAt: record.signedAt.toISOString()
+		signedAt: record.signedAt.toISOString(),
+		photos: stored.length
 	};
 }
 

@@ -4,6 +4,7 @@ import * as framework from './2026-12-02-02-framework';
 import * as workLog from './2026-12-02-03-work-log';
 import * as reviewDigests from './2026-12-02-04-review-digests';
 import * as assessment from './2026-12-02-05-assessment';
+import * as signOffPhotos from './2026-12-02-06-sign-off-photos';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -13,5 +14,6 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
 	{ name: '2026-12-02-02-framework', ...framework },
 	{ name: '2026-12-02-03-work-log', ...workLog },
 	{ name: '2026-12-02-04-review-digests', ...reviewDigests },
-	{ name: '2026-12-02-05-assessment', ...assessment }
+	{ name: '2026-12-02-05-assessment', ...assessment },
+	{ name: '2026-12-02-06-sign-off-photos', ...signOffPhotos }
 ];

@@ -14,6 +14,7 @@ import { QuizResponse } from './QuizResponse';
 import { RtiRecord } from './RtiRecord';
 import { Session } from './Session';
 import { SignOff } from './SignOff';
+import { SignOffPhoto } from './SignOffPhoto';
 import { Site } from './Site';
 import { SupervisorProfile } from './SupervisorProfile';
 import { Task } from './Task';
@@ -25,6 +26,7 @@ import { User } from './User';
 import { UserToken } from './UserToken';
 
 export {
+	SignOffPhoto,
 	AuditEvent,
 	QuizAttempt,
 	QuizResponse,
@@ -85,6 +87,7 @@ export function initModels(sequelize: Sequelize) {
 		QuizAttempt,
 		QuizResponse,
 		SignOff,
+		SignOffPhoto,
 		AuditEvent
 	]) {
 		model.initModel(sequelize);
@@ -140,4 +143,6 @@ export function initModels(sequelize: Sequelize) {
 	SignOff.belongsTo(Framework, { foreignKey: 'frameworkId', as: 'framework' });
 	SignOff.belongsTo(QuizAttempt, { foreignKey: 'quizAttemptId', as: 'quizAttempt' });
 	SignOff.belongsTo(SignOff, { foreignKey: 'refersToId', as: 'refersTo' });
+	SignOff.hasMany(SignOffPhoto, { foreignKey: 'signOffId', as: 'photos' });
+	SignOffPhoto.belongsTo(SignOff, { foreignKey: 'signOffId', as: 'signOff' });
 }

@@ -86,7 +86,11 @@ export const actions = {
 			return fail(400, { errors, values });
 		}
 		try {
-			const receipt = await assessment.signOff(user, parsed.data, event.locals.session!.id);
+			const files = form.getAll('photos').filter((f): f is File => f instanceof File && f.size > 0);
+			const photos = await Promise.all(
+				files.map(async (f) => ({ bytes: new Uint8Array(await f.arrayBuffer()), name: f.name }))
+			);
+			const receipt = await assessment.signOff(user, parsed.data, event.locals.session!.id, photos);
 			return { receipt };
 		} catch (err) {
 			if (err instanceof EntryProblem) return fail(err.status, { errors: err.errors, values });
