@@ -2,6 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { SignedInUser } from '$lib/server/auth';
 import { LogEntry, LogEntryTask, prepare, Supervision, User, write } from '$lib/server/db';
 import * as framework from '$lib/server/framework';
+import * as people from '$lib/server/people';
 import * as worklog from '$lib/server/worklog';
 import type { EntryInput } from '$lib/schemas/worklog';
 import { DEMO_ACCOUNTS, seedDemo } from '../../seed/demo';
@@ -259,6 +260,15 @@ describe('queries', () => {
 			offset: 0
 		});
 		expect(none.rows.some((r) => r.apprenticeId === apprentice.id)).toBe(false);
-		await write(async () => undefined);
+		const roster = await people.apprentices();
+		expect(roster).toHaveLength(20);
+		const mineRow = roster.find((r) => r.id === apprentice.id)!;
+		const verified = await LogEntry.sum('tenths', {
+			where: { apprenticeId: apprentice.id, status: 'verified' }
+		});
+		expect(mineRow.verifiedTenths).toBe(verified ?? 0);
+		expect(mineRow.waiting).toBe(
+			await LogEntry.count({ where: { apprenticeId: apprentice.id, status: 'submitted' } })
+		);
 	});
 });

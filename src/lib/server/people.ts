@@ -99,3 +99,27 @@ export async function siteSummaries() {
 		  GROUP BY s.id ORDER BY s.code`
 	);
 }
+
+export interface ApprenticeRow {
+	id: string;
+	name: string;
+	cohortName: string;
+	siteName: string | null;
+	verifiedTenths: number;
+	waiting: number;
+}
+
+/** Every active apprentice with verified hours and entries waiting, in one aggregate query. */
+export async function apprentices(): Promise<ApprenticeRow[]> {
+	return select<ApprenticeRow>(
+		`SELECT u.id, u.name, c.name AS cohortName, s.name AS siteName,
+		        COALESCE(SUM(CASE WHEN e.status = 'verified' THEN e.tenths END), 0) AS verifiedTenths,
+		        COUNT(CASE WHEN e.status = 'submitted' THEN 1 END) AS waiting
+		   FROM apprentice_profiles a
+		   JOIN users u ON u.id = a.user_id AND u.active = 1
+		   JOIN cohorts c ON c.id = a.cohort_id
+		   LEFT JOIN sites s ON s.id = u.site_id
+		   LEFT JOIN log_entries e ON e.apprentice_id = u.id
+		  GROUP BY u.id ORDER BY c.start_date, u.name`
+	);
+}

@@ -4,6 +4,10 @@ import * as people from '$lib/server/people';
 
 export const load = (async (event) => {
 	requireRole(event, 'coordinator');
-	const [cohorts, sites] = await Promise.all([people.cohortSummaries(), people.siteSummaries()]);
-	return { cohorts, sites };
+	const [cohorts, sites, apprentices] = await Promise.all([
+		people.cohortSummaries(),
+		people.siteSummaries(),
+		people.apprentices()
+	]);
+	return { cohorts, sites, apprentices };
 }) satisfies PageServerLoad;
