@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { SignedInUser } from '$lib/server/auth';
-import { LogEntry, LogEntryTask, prepare, Supervision, User, write } from '$lib/server/db';
+import { LogEntry, LogEntryTask, prepare, Supervision, User } from '$lib/server/db';
 import * as framework from '$lib/server/framework';
 import * as people from '$lib/server/people';
 import * as worklog from '$lib/server/worklog';
