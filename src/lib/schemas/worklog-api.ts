@@ -11,5 +11,7 @@ export const entryListSchema = z.object({
 	sort: z.enum(['oldest', 'newest', 'apprentice']).default('oldest'),
 	apprenticeId: z.string().trim().min(1).max(40).optional(),
 	page: z.coerce.number().int().min(1).max(10_000).default(1),
-	size: z.coerce.number().int().min(1).max(200).default(50)
+	size: z.coerce.number().int().min(1).max(200).default(50),
+	/** `full` returns each entry with its task titles, notes and evidence, in one query. */
+	view: z.enum(['summary', 'full']).default('summary')
 });

@@ -8,6 +8,7 @@ import {
 	Framework,
 	LogEntry,
 	LogEntryTask,
+	Supervision,
 	Task,
 	User,
 	write
@@ -215,11 +216,20 @@ export async function verify(user: SignedInUser, ids: number[]): Promise<ReviewR
 		throw new EntryProblem(403, { form: 'Only journeyworkers verify hours.' });
 	}
 	return write(async (transaction) => {
-		const entries = await LogEntry.findAll({ where: { id: ids }, transaction });
+		const [entries, supervisions] = await Promise.all([
+			LogEntry.findAll({ where: { id: ids }, transaction }),
+			Supervision.findAll({
+				where: { supervisorId: user.id },
+				attributes: ['apprenticeId'],
+				transaction
+			})
+		]);
+		// One lookup of whom this journeyworker supervises, not one per entry.
+		const mine = new Set(supervisions.map((s) => s.apprenticeId).filter((id) => id !== user.id));
 		const result: ReviewResult = { verified: [], refused: [] };
 		for (const id of ids) {
 			const entry = entries.find((e) => e.id === id);
-			if (!entry || !(await supervises(user.id, entry.apprenticeId, transaction))) {
+			if (!entry || !mine.has(entry.apprenticeId)) {
 				result.refused.push({ id, reason: 'Not an entry of an apprentice you supervise.' });
 			} else if (entry.status !== 'submitted') {
 				result.refused.push({
@@ -300,7 +310,14 @@ export async function giveBack(user: SignedInUser, id: number, comment: string):
 
 /** One entry with its task split and evidence, for people allowed to see it. */
 export async function detail(id: number) {
-	const entry = await LogEntry.findByPk(id, {
+	const [entry] = await details([id]);
+	return entry ?? null;
+}
+
+/** Several entries in full with one query, in the order of `ids` (unknown ids are left out). */
+export async function details(ids: number[]) {
+	const rows = await LogEntry.findAll({
+		where: { id: ids },
 		include: [
 			{ model: User, as: 'apprentice', attributes: ['id', 'name'] },
 			{ model: User, as: 'supervisor', attributes: ['id', 'name'] },
@@ -321,7 +338,14 @@ export async function detail(id: number) {
 			[{ model: Evidence, as: 'evidence' }, 'id', 'ASC']
 		]
 	});
-	if (!entry) return null;
+	const byId = new Map(rows.map((r) => [r.id, r]));
+	return ids.flatMap((id) => {
+		const row = byId.get(id);
+		return row ? [shape(row)] : [];
+	});
+}
+
+function shape(entry: LogEntry) {
 	const e = entry as LogEntry & {
 		apprentice: User;
 		supervisor: User;
@@ -372,4 +396,4 @@ export async function detail(id: number) {
 	};
 }
 
-export type EntryDetail = NonNullable<Awaited<ReturnType<typeof detail>>>;
+export type EntryDetail = ReturnType<typeof shape>;

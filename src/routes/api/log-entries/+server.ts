@@ -21,7 +21,9 @@ export const GET = (async (event) => {
 					apprenticeId,
 					...paging
 				});
-	return answer(async () => ({ page, size, total: result.total, entries: result.rows }));
+	const entries =
+		query.data.view === 'full' ? await worklog.details(result.rows.map((r) => r.id)) : result.rows;
+	return answer(async () => ({ page, size, total: result.total, entries }));
 }) satisfies RequestHandler;
 
 export const POST = (async (event) => {

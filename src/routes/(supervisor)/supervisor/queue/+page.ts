@@ -5,7 +5,7 @@ import { apiQuery, readFilter } from './filter';
 
 interface QueuePage {
 	total: number;
-	entries: { id: number }[];
+	entries: EntryDetail[];
 }
 
 /**
@@ -14,22 +14,16 @@ interface QueuePage {
  */
 export const load = (async ({ fetch, url, data }) => {
 	const filter = readFilter(url.searchParams);
-	const response = await fetch(`/api/log-entries?${apiQuery(filter)}`);
+	// One request: the review needs every task title, the notes and the photos.
+	const response = await fetch(`/api/log-entries?${apiQuery(filter)}&view=full`);
 	if (response.status === 401) redirect(303, `/login?next=${encodeURIComponent(url.pathname)}`);
 	if (!response.ok) error(response.status, 'The review queue could not be loaded.');
 	const list: QueuePage = await response.json();
-	// The list holds summaries; the review needs every task title, the notes and the photos.
-	const entries = await Promise.all(
-		list.entries.map(async ({ id }) => {
-			const one = await fetch(`/api/log-entries/${id}`);
-			return one.ok ? ((await one.json()) as EntryDetail) : null;
-		})
-	);
 	return {
 		...data,
 		filter,
 		total: list.total,
-		entries: entries.filter((e): e is EntryDetail => e !== null),
+		entries: list.entries,
 		verifiedCount: Number(url.searchParams.get('verified')) || 0,
 		returnedOne: url.searchParams.has('returned')
 	};
