@@ -81,17 +81,18 @@ export async function seedDemo(): Promise<'seeded' | 'already seeded'> {
 				name: 'Automotive Service Technician (hybrid, 4 years)',
 				approach: 'hybrid',
 				termYears: 4,
-				ojlHours: 8000,
+				// A hybrid standard: a specified minimum of hours and the coverage, 29 CFR 29.5(b)(2)(iii).
+				ojlHours: 6000,
 				rtiHoursPerYear: 144,
-				probationHours: 2000,
+				probationHours: 1500,
 				journeyworkerRateCents: 3400,
 				wageSchedule: [
 					{ fromHours: 0, percent: 55 },
-					{ fromHours: 2000, percent: 65 },
-					{ fromHours: 4000, percent: 75 },
-					{ fromHours: 6000, percent: 85 }
+					{ fromHours: 1500, percent: 65 },
+					{ fromHours: 3000, percent: 75 },
+					{ fromHours: 4500, percent: 85 }
 				],
-				ratioApprentices: 2,
+				ratioApprentices: 3,
 				ratioJourneyworkers: 1,
 				tierThresholds: [95, 80, 50],
 				certificateValidityMonths: null

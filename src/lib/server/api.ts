@@ -48,3 +48,10 @@ export function idParam(value: string | undefined): number {
 	if (!Number.isInteger(id) || id <= 0 || id > 2_147_483_647) error(404, 'Not found.');
 	return id;
 }
+
+/** A cohort number, or `all` for every cohort; anything else is a 404. */
+export function cohortParam(value: string | undefined): number | 'all' {
+	if (value === 'all') return 'all';
+	if (!/^\d{1,10}$/.test(value ?? '')) error(404, 'There is no cohort with that number.');
+	return idParam(value);
+}

@@ -10,6 +10,12 @@ const schema = z.object({
 	FAKE_MAIL_DIR: z.string().optional(),
 	UPLOADS_DIR: z.string().default('data/uploads'),
 	KEYS_DIR: z.string().default('data/keys'),
+	/** Rendered certificate PDFs, cached by serial and paper size (safe to delete). */
+	CERTIFICATES_DIR: z.string().default('data/certificates'),
+	/** The sponsor named as issuer on certificates and portable credentials. */
+	ISSUER_NAME: z.string().trim().min(1).max(120).default('Riverbend Training Partnership'),
+	/** Public verification lookups allowed per address per minute. */
+	VERIFY_LOOKUPS_PER_MINUTE: z.coerce.number().int().min(1).max(1_000_000).default(120),
 	NODE_ENV: z.string().default('development'),
 	QUIZ_QUESTIONS: z.coerce.number().int().min(1).max(50).default(5),
 	QUIZ_PASS_MARK: z.coerce.number().int().min(1).max(100).default(80),

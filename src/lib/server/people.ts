@@ -1,6 +1,7 @@
 import { QueryTypes } from 'sequelize';
 import type { Approach } from './db/models/Programme';
 import { sequelize } from './db';
+import { COUNTED } from './db/sql';
 
 const select = <T extends object>(
 	sql: string,
@@ -113,7 +114,7 @@ export interface ApprenticeRow {
 export async function apprentices(): Promise<ApprenticeRow[]> {
 	return select<ApprenticeRow>(
 		`SELECT u.id, u.name, c.name AS cohortName, s.name AS siteName,
-		        COALESCE(SUM(CASE WHEN e.status = 'verified' THEN e.tenths END), 0) AS verifiedTenths,
+		        COALESCE(SUM(CASE WHEN ${COUNTED} THEN e.tenths END), 0) AS verifiedTenths,
 		        COUNT(CASE WHEN e.status = 'submitted' THEN 1 END) AS waiting
 		   FROM apprentice_profiles a
 		   JOIN users u ON u.id = a.user_id AND u.active = 1

@@ -17,6 +17,7 @@ import {
 	write,
 	type StepResult
 } from '../db';
+import { COUNTED, STANDING } from '../db/sql';
 import * as framework from '../framework';
 import * as mail from '../mail';
 import { processUpload } from '../evidence';
@@ -51,7 +52,7 @@ async function currentTask(code: string) {
 export async function verifiedTenths(apprenticeId: string, code: string): Promise<number> {
 	const [row] = await sequelize.query<{ tenths: number | null }>(
 		`SELECT SUM(lt.tenths) AS tenths FROM log_entry_tasks lt
-		   JOIN log_entries e ON e.id = lt.entry_id AND e.status = 'verified'
+		   JOIN log_entries e ON e.id = lt.entry_id AND ${COUNTED}
 		   JOIN framework_tasks t ON t.id = lt.task_id
 		  WHERE e.apprentice_id = :apprenticeId AND t.code = :code`,
 		{ type: QueryTypes.SELECT, replacements: { apprenticeId, code } }
@@ -377,8 +378,7 @@ export async function currentLevels(apprenticeId: string, transaction?: Transact
 	const rows = await sequelize.query<{ code: string; level: 1 | 2 | 3 | 4; signedAt: string }>(
 		`SELECT t.code, MAX(s.level) AS level, MAX(s.signed_at) AS signedAt
 		   FROM sign_offs s JOIN framework_tasks t ON t.id = s.task_id
-		  WHERE s.apprentice_id = :apprenticeId AND s.kind IN ('sign-off', 'correction')
-		    AND NOT EXISTS (SELECT 1 FROM sign_offs r WHERE r.refers_to_id = s.id)
+		  WHERE s.apprentice_id = :apprenticeId AND ${STANDING}
 		  GROUP BY t.code`,
 		{ type: QueryTypes.SELECT, replacements: { apprenticeId }, transaction }
 	);
@@ -439,13 +439,12 @@ export async function matrix(apprenticeId: string): Promise<MatrixCell[]> {
 	return sequelize.query<MatrixCell>(
 		`WITH hours AS (
 		   SELECT t.code, SUM(lt.tenths) AS tenths FROM log_entry_tasks lt
-		     JOIN log_entries e ON e.id = lt.entry_id AND e.status = 'verified' AND e.apprentice_id = :apprenticeId
+		     JOIN log_entries e ON e.id = lt.entry_id AND e.apprentice_id = :apprenticeId AND ${COUNTED}
 		     JOIN framework_tasks t ON t.id = lt.task_id GROUP BY t.code),
 		 levels AS (
 		   SELECT t.code, MAX(s.level) AS level, MAX(s.signed_at) AS lastAssessed FROM sign_offs s
 		     JOIN framework_tasks t ON t.id = s.task_id
-		    WHERE s.apprentice_id = :apprenticeId AND s.kind IN ('sign-off', 'correction')
-		      AND NOT EXISTS (SELECT 1 FROM sign_offs r WHERE r.refers_to_id = s.id)
+		    WHERE s.apprentice_id = :apprenticeId AND ${STANDING}
 		    GROUP BY t.code),
 		 quiz AS (
 		   SELECT t.code, MAX(q.passed) AS passed FROM quiz_attempts q JOIN framework_tasks t ON t.id = q.task_id

@@ -2,6 +2,7 @@ import type { Sequelize } from 'sequelize';
 import { ApprenticeProfile } from './ApprenticeProfile';
 import { Area } from './Area';
 import { AuditEvent } from './AuditEvent';
+import { Certificate } from './Certificate';
 import { Cohort } from './Cohort';
 import { Evidence } from './Evidence';
 import { Framework } from './Framework';
@@ -26,6 +27,7 @@ import { User } from './User';
 import { UserToken } from './UserToken';
 
 export {
+	Certificate,
 	SignOffPhoto,
 	AuditEvent,
 	QuizAttempt,
@@ -60,6 +62,8 @@ export { ENTRY_STATUSES } from './LogEntry';
 export type { RtiResult } from './RtiRecord';
 export type { SignOffKind, StepResult } from './SignOff';
 export type { DrawnQuestion } from './QuizAttempt';
+export type { RevocationReason, ScopeKind } from './Certificate';
+export { REVOCATION_REASONS, SCOPE_KINDS } from './Certificate';
 
 /** Initialises every model on one Sequelize instance, then wires the associations. */
 export function initModels(sequelize: Sequelize) {
@@ -88,7 +92,8 @@ export function initModels(sequelize: Sequelize) {
 		QuizResponse,
 		SignOff,
 		SignOffPhoto,
-		AuditEvent
+		AuditEvent,
+		Certificate
 	]) {
 		model.initModel(sequelize);
 	}
@@ -145,4 +150,9 @@ export function initModels(sequelize: Sequelize) {
 	SignOff.belongsTo(SignOff, { foreignKey: 'refersToId', as: 'refersTo' });
 	SignOff.hasMany(SignOffPhoto, { foreignKey: 'signOffId', as: 'photos' });
 	SignOffPhoto.belongsTo(SignOff, { foreignKey: 'signOffId', as: 'signOff' });
+
+	Certificate.belongsTo(User, { foreignKey: 'apprenticeId', as: 'apprentice' });
+	Certificate.belongsTo(Programme, { foreignKey: 'programmeId', as: 'programme' });
+	Certificate.belongsTo(User, { foreignKey: 'issuedById', as: 'issuedBy' });
+	Certificate.belongsTo(User, { foreignKey: 'revokedById', as: 'revokedBy' });
 }
