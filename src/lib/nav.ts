@@ -12,6 +12,7 @@ export const NAV: Record<RoleName, NavItem[]> = {
 		{ href: '/apprentice/log', label: 'My log' },
 		{ href: '/apprentice/rti', label: 'Instruction' },
 		{ href: '/apprentice/matrix', label: 'My matrix' },
+		{ href: '/apprentice/certificates', label: 'Certificates' },
 		{ href: '/tasks', label: 'Tasks' }
 	],
 	supervisor: [
@@ -21,8 +22,10 @@ export const NAV: Record<RoleName, NavItem[]> = {
 	],
 	coordinator: [
 		{ href: '/coordinator', label: 'Cohorts' },
+		{ href: '/coordinator/programmes', label: 'Rules' },
 		{ href: '/coordinator/frameworks', label: 'Framework' },
 		{ href: '/coordinator/rti', label: 'Instruction' },
+		{ href: '/coordinator/certificates', label: 'Certificates' },
 		{ href: '/tasks', label: 'Tasks' }
 	],
 	admin: [

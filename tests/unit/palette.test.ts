@@ -56,3 +56,25 @@ describe('palette', () => {
 		expect(contrast(color('signal'), color('paper'))).toBeGreaterThanOrEqual(3);
 	});
 });
+
+describe('chart colours', () => {
+	const hex = (rgb: string) =>
+		'#' +
+		rgb
+			.match(/\d+/g)!
+			.map((n) => Number(n).toString(16).padStart(2, '0'))
+			.join('');
+
+	it('keep every heat-map cell readable: 4.5:1 between its text and its shade (WCAG 2.2 AA)', async () => {
+		const { heat } = await import('../../src/lib/chart-colours');
+		for (let i = 0; i <= 100; i++) {
+			const { background, text } = heat(i / 100);
+			expect(contrast(hex(background), text), `share ${i} %`).toBeGreaterThanOrEqual(4.5);
+		}
+	});
+
+	it('draw series that stand 3:1 against the card, as UI graphics must (WCAG 2.2 1.4.11)', async () => {
+		const { SERIES } = await import('../../src/lib/chart-colours');
+		for (const c of SERIES) expect(contrast(c, '#ffffff'), c).toBeGreaterThanOrEqual(3);
+	});
+});
