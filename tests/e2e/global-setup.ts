@@ -24,7 +24,8 @@ const freePort = () =>
 
 /** Fresh demo data, the fake SMTP server and the built app (`node build`) on free ports. */
 export default async function setup(project: TestProject) {
-	if (!existsSync('build/index.js'))
+	const build = process.env.BUILD_DIR || 'build';
+	if (!existsSync(`${build}/index.js`))
 		throw new Error('Run `npm run build` before the browser tests.');
 	const dir = mkdtempSync(path.join(os.tmpdir(), 'journeymark-e2e-'));
 	const mailDir = path.join(dir, 'mail');
@@ -52,7 +53,7 @@ export default async function setup(project: TestProject) {
 	const code = await new Promise<number | null>((r) => seeded.on('exit', r));
 	if (code !== 0) throw new Error('Seeding the demo data failed');
 
-	const server: ChildProcess = spawn(process.execPath, ['build'], { env, stdio: 'inherit' });
+	const server: ChildProcess = spawn(process.execPath, [build], { env, stdio: 'inherit' });
 	let stopping = false;
 	server.on('exit', (code, signal) => {
 		if (!stopping)
