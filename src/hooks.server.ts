@@ -1,6 +1,7 @@
 import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { lucia } from '$lib/server/auth';
+import { ring } from '$lib/server/certificates/keys';
 import { prepare } from '$lib/server/db';
 import * as framework from '$lib/server/framework';
 import { startDailyJobs } from '$lib/server/schedule';
@@ -8,6 +9,8 @@ import { startDailyJobs } from '$lib/server/schedule';
 export const init: ServerInit = async () => {
 	await prepare();
 	await framework.ensureDefault();
+	// Issuer keys exist before the first certificate or key-set request, not on it.
+	await ring();
 	if (process.env.DAILY_JOBS !== 'off') startDailyJobs();
 };
 
