@@ -10,7 +10,7 @@ import { config } from '../src/lib/server/config';
 import { analyse, prepare, User } from '../src/lib/server/db';
 import { ensureDefault } from '../src/lib/server/framework';
 import { hashPassword } from '../src/lib/server/password';
-import { DEMO_PASSWORD } from './demo';
+import { DEMO_PASSWORD, DEMO_PROGRAMME } from './demo';
 import { generateSignOffs, loadSignOffTasks, type SignOffApprentice } from './signoffs';
 import { generateWorkLog, type WorkLogApprentice } from './worklog';
 
@@ -72,26 +72,8 @@ const INTAKES = ['2023-09-04', '2024-09-02', '2025-09-01', '2026-09-07'];
 const STAGGER_DAYS = 56;
 const BATCH_ROWS = 400;
 
-const PROGRAMME = {
-	id: 1,
-	name: 'Automotive Service Technician (hybrid, 4 years)',
-	approach: 'hybrid',
-	termYears: 4,
-	ojlHours: 8000,
-	rtiHoursPerYear: 144,
-	probationHours: 2000,
-	journeyworkerRateCents: 3400,
-	wageSchedule: [
-		{ fromHours: 0, percent: 55 },
-		{ fromHours: 2000, percent: 65 },
-		{ fromHours: 4000, percent: 75 },
-		{ fromHours: 6000, percent: 85 }
-	],
-	ratioApprentices: 4,
-	ratioJourneyworkers: 1,
-	tierThresholds: [95, 80, 50],
-	certificateValidityMonths: null
-};
+// The demo's programme, with a 4:1 ratio for shops of about fifteen apprentices.
+const PROGRAMME = { id: 1, ...DEMO_PROGRAMME, ratioApprentices: 4 };
 
 const DAY_MS = 86_400_000;
 const isoOf = (day: number) => new Date(day * DAY_MS).toISOString().slice(0, 10);

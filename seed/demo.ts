@@ -61,6 +61,28 @@ const APPRENTICES = [
 	'Sol Ibarra'
 ];
 
+/** The demo's programme: a hybrid standard of our invented training partnership. */
+export const DEMO_PROGRAMME = {
+	name: 'Automotive Service Technician (hybrid, 4 years)',
+	approach: 'hybrid' as const,
+	termYears: 4,
+	// A hybrid standard: a specified minimum of hours and the coverage, 29 CFR 29.5(b)(2)(iii).
+	ojlHours: 6000,
+	rtiHoursPerYear: 144,
+	probationHours: 1500,
+	journeyworkerRateCents: 3400,
+	wageSchedule: [
+		{ fromHours: 0, percent: 55 },
+		{ fromHours: 1500, percent: 65 },
+		{ fromHours: 3000, percent: 75 },
+		{ fromHours: 4500, percent: 85 }
+	],
+	ratioApprentices: 3,
+	ratioJourneyworkers: 1,
+	tierThresholds: [95, 80, 50] as [number, number, number],
+	certificateValidityMonths: null
+} satisfies Parameters<typeof Programme.create>[0];
+
 const slug = (name: string) => name.toLowerCase().replace(/[^a-z]+/g, '.');
 
 export async function seedDemo(): Promise<'seeded' | 'already seeded'> {
@@ -76,29 +98,7 @@ export async function seedDemo(): Promise<'seeded' | 'already seeded'> {
 	const passwordHash = await hashPassword(DEMO_PASSWORD);
 	await write(async (transaction) => {
 		const sites = await Site.bulkCreate(SITES, { transaction });
-		const programme = await Programme.create(
-			{
-				name: 'Automotive Service Technician (hybrid, 4 years)',
-				approach: 'hybrid',
-				termYears: 4,
-				// A hybrid standard: a specified minimum of hours and the coverage, 29 CFR 29.5(b)(2)(iii).
-				ojlHours: 6000,
-				rtiHoursPerYear: 144,
-				probationHours: 1500,
-				journeyworkerRateCents: 3400,
-				wageSchedule: [
-					{ fromHours: 0, percent: 55 },
-					{ fromHours: 1500, percent: 65 },
-					{ fromHours: 3000, percent: 75 },
-					{ fromHours: 4500, percent: 85 }
-				],
-				ratioApprentices: 3,
-				ratioJourneyworkers: 1,
-				tierThresholds: [95, 80, 50],
-				certificateValidityMonths: null
-			},
-			{ transaction }
-		);
+		const programme = await Programme.create({ ...DEMO_PROGRAMME }, { transaction });
 		const [autumn, spring] = await Cohort.bulkCreate(
 			[
 				{

@@ -21,31 +21,15 @@ import {
 } from '$lib/server/db';
 import * as framework from '$lib/server/framework';
 import * as worklog from '$lib/server/worklog';
-import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from '../../seed/demo';
+import { DEMO_PASSWORD, seedDemo } from '../../seed/demo';
 import { waitForMail } from '../helpers/mail';
+import { signed, byRole } from '../helpers/accounts';
 
 let apprentice: SignedInUser;
 let supervisor: SignedInUser;
 let stranger: SignedInUser;
 let coordinator: SignedInUser;
 let task: Task;
-
-const signed = (u: User) =>
-	({
-		id: u.id,
-		email: u.email,
-		name: u.name,
-		role: u.role,
-		active: true,
-		siteId: u.siteId ?? null
-	}) as SignedInUser;
-const byRole = async (role: string) =>
-	signed(
-		await User.findOne({
-			where: { email: DEMO_ACCOUNTS.find((a) => a.role === role)!.email },
-			rejectOnEmpty: true
-		})
-	);
 
 const refusal = async (promise: Promise<unknown>) => {
 	try {

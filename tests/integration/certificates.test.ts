@@ -29,26 +29,11 @@ import { GET as verifyRoute } from '../../src/routes/api/verify/[serial]/+server
 import { GET as jwksRoute } from '../../src/routes/.well-known/jwks.json/+server';
 import { GET as statusRoute } from '../../src/routes/api/status-lists/[id]/+server';
 import { GET as credentialRoute } from '../../src/routes/api/certificates/[serial]/credential/+server';
-import { DEMO_ACCOUNTS, seedDemo } from '../../seed/demo';
+import { seedDemo } from '../../seed/demo';
 import { enlarge, readPdf } from '../helpers/pdf';
 import { waitForMail } from '../helpers/mail';
-
-const signed = (u: User) =>
-	({
-		id: u.id,
-		email: u.email,
-		name: u.name,
-		role: u.role,
-		active: true,
-		siteId: u.siteId ?? null
-	}) as SignedInUser;
-const demo = async (role: string) =>
-	signed(
-		await User.findOne({
-			where: { email: DEMO_ACCOUNTS.find((a) => a.role === role)!.email },
-			rejectOnEmpty: true
-		})
-	);
+import { signed, byRole as demo } from '../helpers/accounts';
+import { call } from '../helpers/route';
 
 let coordinator: SignedInUser;
 let apprentice: SignedInUser;
@@ -97,29 +82,6 @@ async function completeArea(
 	);
 	return inArea;
 }
-
-/** Calls a +server.ts handler the way SvelteKit would, with only what it reads. */
-const call = async (
-	handler: (event: never) => Response | Promise<Response>,
-	params: Record<string, string>,
-	extra: Record<string, unknown> = {}
-) => {
-	try {
-		return await handler({
-			params,
-			url: new URL('http://localhost:3999/api/x'),
-			getClientAddress: () => extra.address ?? '203.0.113.9',
-			locals: { user: extra.user ?? null },
-			...extra
-		} as never);
-	} catch (err) {
-		// SvelteKit's error() throws an HttpError; turn it into the response the app would send.
-		const e = err as { status?: number; body?: { message: string } };
-		if (typeof e.status === 'number')
-			return new Response(JSON.stringify(e.body), { status: e.status });
-		throw err;
-	}
-};
 
 const counts = async () => ({
 	certificates: await Certificate.count(),

@@ -10,11 +10,12 @@ import * as framework from '$lib/server/framework';
 import * as progress from '$lib/server/progress';
 import * as worklog from '$lib/server/worklog';
 import * as rti from '$lib/server/worklog/rti';
-import { DEMO_ACCOUNTS, seedDemo } from '../../seed/demo';
+import { seedDemo } from '../../seed/demo';
 import { GET as apprenticeCsvGet } from '../../src/routes/api/apprentices/[id]/record.csv/+server';
 import { GET as apprenticePdfGet } from '../../src/routes/api/apprentices/[id]/record.pdf/+server';
 import { GET as cohortCsvGet } from '../../src/routes/api/cohorts/[id]/record.csv/+server';
 import { GET as cohortPdfGet } from '../../src/routes/api/cohorts/[id]/record.pdf/+server';
+import { byRole } from '../helpers/accounts';
 
 type Handler = (event: never) => Promise<Response>;
 type Row = Record<string, string>;
@@ -25,23 +26,6 @@ let coordinator: SignedInUser;
 let cohortId: number;
 let otherCohortId: number;
 const INJECTED = '=HYPERLINK("http://attacker.invalid","click")';
-
-const signed = (u: User) =>
-	({
-		id: u.id,
-		email: u.email,
-		name: u.name,
-		role: u.role,
-		active: true,
-		siteId: u.siteId ?? null
-	}) as SignedInUser;
-const byRole = async (role: string) =>
-	signed(
-		await User.findOne({
-			where: { email: DEMO_ACCOUNTS.find((a) => a.role === role)!.email },
-			rejectOnEmpty: true
-		})
-	);
 
 /** Calls a route handler as SvelteKit would; an `error()` thrown inside becomes its status. */
 async function call(handler: Handler, id: string, user: SignedInUser | null) {

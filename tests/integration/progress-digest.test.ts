@@ -7,9 +7,10 @@ import * as framework from '$lib/server/framework';
 import * as progress from '$lib/server/progress';
 import * as digest from '$lib/server/progress-digest';
 import * as worklog from '$lib/server/worklog';
-import { DEMO_ACCOUNTS, seedDemo } from '../../seed/demo';
+import { seedDemo } from '../../seed/demo';
 import { actions } from '../../src/routes/(coordinator)/coordinator/digest/+page.server';
 import { waitForMail } from '../helpers/mail';
+import { byRole } from '../helpers/accounts';
 
 const run = promisify(execFile);
 
@@ -20,23 +21,6 @@ let taskId: number;
 let steps: { fromHours: number; percent: number }[];
 const today = new Date().toISOString().slice(0, 10);
 const daysAgo = (n: number) => new Date(Date.now() - n * 86_400_000).toISOString().slice(0, 10);
-
-const signed = (u: User) =>
-	({
-		id: u.id,
-		email: u.email,
-		name: u.name,
-		role: u.role,
-		active: true,
-		siteId: u.siteId ?? null
-	}) as SignedInUser;
-const byRole = async (role: string) =>
-	signed(
-		await User.findOne({
-			where: { email: DEMO_ACCOUNTS.find((a) => a.role === role)!.email },
-			rejectOnEmpty: true
-		})
-	);
 
 async function log(day: string, hours: number, verify: boolean) {
 	const entry = await worklog.create(

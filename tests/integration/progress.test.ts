@@ -22,8 +22,9 @@ import {
 	GET as programmeGet,
 	PUT as programmePut
 } from '../../src/routes/api/programmes/[id]/+server';
-import { DEMO_ACCOUNTS, seedDemo } from '../../seed/demo';
+import { seedDemo } from '../../seed/demo';
 import { call } from '../helpers/route';
+import { byRole } from '../helpers/accounts';
 
 const TODAY = '2026-12-02';
 let apprentice: SignedInUser;
@@ -32,23 +33,6 @@ let coordinator: SignedInUser;
 let cohortId: number;
 let programmeId: number;
 let tasks: Task[];
-
-const signed = (u: User) =>
-	({
-		id: u.id,
-		email: u.email,
-		name: u.name,
-		role: u.role,
-		active: true,
-		siteId: u.siteId ?? null
-	}) as SignedInUser;
-const byRole = async (role: string) =>
-	signed(
-		await User.findOne({
-			where: { email: DEMO_ACCOUNTS.find((a) => a.role === role)!.email },
-			rejectOnEmpty: true
-		})
-	);
 
 async function entry(
 	day: string,
