@@ -1,8 +1,10 @@
 import { Op } from 'sequelize';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { SignedInUser } from '$lib/server/auth';
+import * as audit from '$lib/server/audit';
 import {
 	ApprenticeProfile,
+	AuditEvent,
 	LogEntry,
 	LogEntryTask,
 	prepare,
@@ -310,5 +312,62 @@ describe('programme rules', () => {
 		const g = (await progress.apprentice(apprentice.id, TODAY))!.progress;
 		expect(g.wage.percent).toBe(60);
 		await put(rules);
+	});
+});
+
+describe('credit for prior experience', () => {
+	const post = async (fields: Record<string, string>, user = coordinator) => {
+		const { actions } =
+			await import('../../src/routes/(coordinator)/coordinator/apprentices/[id]/+page.server');
+		const body = new FormData();
+		for (const [k, v] of Object.entries(fields)) body.set(k, v);
+		try {
+			return await actions.credit({
+				params: { id: apprentice.id },
+				url: new URL(`http://localhost:3999/coordinator/apprentices/${apprentice.id}?/credit`),
+				locals: { user },
+				request: new Request('http://localhost:3999/x', { method: 'POST', body })
+			} as never);
+		} catch (thrown) {
+			return thrown as { status: number; location?: string };
+		}
+	};
+
+	it('refuses negative, oversized and unexplained credit, saving nothing', async () => {
+		const before = (await ApprenticeProfile.findByPk(apprentice.id))!.priorCreditHours;
+		const audits = await AuditEvent.count();
+		for (const fields of [
+			{ priorCreditHours: '-5', reason: 'Previous employer' },
+			{ priorCreditHours: '50000', reason: 'Previous employer' },
+			{ priorCreditHours: '7000', reason: 'More than the programme' },
+			{ priorCreditHours: '10.25', reason: 'Previous employer' },
+			{ priorCreditHours: '200', reason: '' }
+		]) {
+			const res = (await post(fields)) as { status: number };
+			expect(res.status, JSON.stringify(fields)).toBe(400);
+		}
+		expect((await ApprenticeProfile.findByPk(apprentice.id))!.priorCreditHours).toBe(before);
+		expect(await AuditEvent.count()).toBe(audits);
+		expect(
+			((await post({ priorCreditHours: '10', reason: 'x' }, apprentice)) as { status: number })
+				.status
+		).toBe(403);
+	});
+
+	it('saves credit with its reason in the audit trail, and progress counts it', async () => {
+		const res = (await post({
+			priorCreditHours: '480',
+			reason: 'College lube-and-tyre course, 2024'
+		})) as {
+			status: number;
+		};
+		expect(res.status).toBe(303);
+		const g = (await progress.apprentice(apprentice.id, TODAY))!.progress;
+		expect(g.hours.credit).toBe(480);
+		expect(g.hours.counted).toBe(206 + 480);
+		const last = await AuditEvent.findOne({ order: [['id', 'DESC']] });
+		expect(last!.kind).toBe('credit.set');
+		expect(last!.content).toContain('College lube-and-tyre course');
+		expect((await audit.verify()).ok).toBe(true);
 	});
 });

@@ -145,3 +145,17 @@ export const programmeRulesSchema = z
 	});
 
 export type ProgrammeRulesInput = z.infer<typeof programmeRulesSchema>;
+
+/** Advanced standing for prior experience or training, 29 CFR 29.5(b)(12). */
+export const priorCreditSchema = z.object({
+	priorCreditHours: z.coerce
+		.number({ error: 'Prior credit: enter a number of hours.' })
+		.min(0, 'Prior credit: 0 hours or more.')
+		.max(20000, 'Prior credit: at most 20,000 hours.')
+		.refine((n) => Number.isInteger(n * 10), 'Prior credit: use tenths of an hour at most.'),
+	reason: z
+		.string()
+		.trim()
+		.min(3, 'Say what the credit is for (for example, the course or previous employer).')
+		.max(300, 'Keep the reason under 300 characters.')
+});

@@ -9,7 +9,8 @@ export type AuditKind =
 	| 'sign-off.corrected'
 	| 'sign-off.revoked'
 	| 'certificate.issued'
-	| 'certificate.revoked';
+	| 'certificate.revoked'
+	| 'credit.set';
 
 /**
  * Appends one event to the hash chain. Call it inside the write transaction that makes the

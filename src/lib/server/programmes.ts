@@ -1,5 +1,7 @@
 /** Programme rules: read for the editor, saved whole in one write, never half-way. */
-import { Cohort, Programme, write } from './db';
+import * as audit from './audit';
+import type { SignedInUser } from './auth';
+import { ApprenticeProfile, Cohort, Programme, write } from './db';
 import type { ProgrammeRulesInput } from '$lib/schemas/programme';
 
 export async function list() {
@@ -78,5 +80,41 @@ export async function update(id: number, input: ProgrammeRulesInput) {
 			{ transaction }
 		);
 		return p;
+	});
+}
+
+/**
+ * Sets an apprentice's credit for prior experience. It cannot exceed the programme's hours, and
+ * the change, with its reason, enters the audit trail.
+ */
+export async function setPriorCredit(
+	actor: SignedInUser,
+	apprenticeId: string,
+	hours: number,
+	reason: string
+): Promise<{ ok: true } | { ok: false; error: string }> {
+	return write(async (transaction) => {
+		const profile = await ApprenticeProfile.findByPk(apprenticeId, {
+			transaction,
+			include: [{ model: Cohort, as: 'cohort', include: [{ model: Programme, as: 'programme' }] }]
+		});
+		const programme = (profile as unknown as { cohort?: { programme?: Programme } })?.cohort
+			?.programme;
+		if (!profile || !programme) return { ok: false, error: 'No such apprentice.' };
+		if (hours > programme.ojlHours) {
+			return {
+				ok: false,
+				error: `Prior credit cannot exceed the programme's ${programme.ojlHours.toLocaleString('en-US')} on-the-job hours.`
+			};
+		}
+		const before = profile.priorCreditHours;
+		await profile.update({ priorCreditHours: hours }, { transaction });
+		await audit.append(transaction, {
+			kind: 'credit.set',
+			subject: `apprentice:${apprenticeId}`,
+			actorId: actor.id,
+			content: { apprenticeId, before, hours, reason }
+		});
+		return { ok: true };
 	});
 }

@@ -4,8 +4,10 @@ import * as assessment from '$lib/server/assessment';
 import { requireRole } from '$lib/server/auth';
 import { ApprenticeProfile, User } from '$lib/server/db';
 import { EntryProblem } from '$lib/server/worklog/errors';
-import { parseForm } from '$lib/schemas/forms';
+import * as programmes from '$lib/server/programmes';
+import { keepValues, parseForm } from '$lib/schemas/forms';
 import { revokeSchema, taskCodeSchema } from '$lib/schemas/assessment';
+import { priorCreditSchema } from '$lib/schemas/programme';
 
 async function apprenticeOr404(id: string) {
 	if (id.length > 40 || !(await ApprenticeProfile.findByPk(id))) error(404, 'No such apprentice.');
@@ -16,20 +18,40 @@ export const load = (async (event) => {
 	requireRole(event, 'coordinator');
 	const apprentice = await apprenticeOr404(event.params.id);
 	const code = taskCodeSchema.safeParse(event.url.searchParams.get('task') ?? '');
-	const [cells, history] = await Promise.all([
+	const [cells, history, profile] = await Promise.all([
 		assessment.matrix(apprentice.id),
-		code.success ? assessment.history(apprentice.id, code.data) : []
+		code.success ? assessment.history(apprentice.id, code.data) : [],
+		ApprenticeProfile.findByPk(apprentice.id, { attributes: ['priorCreditHours'] })
 	]);
 	const selected = code.success ? (cells.find((c) => c.code === code.data) ?? null) : null;
 	return {
 		apprentice: { id: apprentice.id, name: apprentice.name },
 		cells,
 		selected: selected && { code: selected.code, title: selected.title },
-		history
+		history,
+		priorCreditHours: profile?.priorCreditHours ?? 0
 	};
 }) satisfies PageServerLoad;
 
 export const actions = {
+	credit: async (event) => {
+		const user = requireRole(event, 'coordinator');
+		const apprentice = await apprenticeOr404(event.params.id);
+		const form = await event.request.formData();
+		const parsed = parseForm(priorCreditSchema, form);
+		if (!parsed.ok)
+			return fail(400, { credit: true, values: keepValues(form), errors: parsed.errors });
+		const { priorCreditHours, reason } = parsed.data;
+		const saved = await programmes.setPriorCredit(user, apprentice.id, priorCreditHours, reason);
+		if (!saved.ok) {
+			return fail(400, {
+				credit: true,
+				values: keepValues(form),
+				errors: { priorCreditHours: saved.error }
+			});
+		}
+		redirect(303, `${event.url.pathname}?credited=1`);
+	},
 	revoke: async (event) => {
 		const user = requireRole(event, 'coordinator');
 		const apprentice = await apprenticeOr404(event.params.id);
