@@ -1,24 +1,11 @@
-import sqlite3 from 'sqlite3';
 import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { launch, openPage, shot, signIn } from './browser';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { dbAll, launch, openPage, shot, signIn } from './browser';
 
 const TABLET = { width: 820, height: 1180 };
 
 let browser: Browser;
 let rosaId: string;
-
-/** Reads the test server's database; ids and counts that no API hands out come from here. */
-function dbAll<T>(sql: string, params: unknown[] = []): Promise<T[]> {
-	return new Promise((resolve, reject) => {
-		const db = new sqlite3.Database(inject('databasePath'), sqlite3.OPEN_READONLY);
-		db.all(sql, params, (err, rows) => {
-			db.close();
-			if (err) reject(err);
-			else resolve(rows as T[]);
-		});
-	});
-}
 
 const signOffCount = async () =>
 	(await dbAll<{ n: number }>('SELECT COUNT(*) AS n FROM sign_offs'))[0].n;

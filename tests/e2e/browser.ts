@@ -1,5 +1,6 @@
 import { mkdirSync } from 'node:fs';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import sqlite3 from 'sqlite3';
 import { inject } from 'vitest';
 
 export const VIEWPORTS = {
@@ -55,4 +56,16 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
 export async function shot(page: Page, name: string) {
 	mkdirSync(SHOTS, { recursive: true });
 	await page.screenshot({ path: `${SHOTS}/${name}.png`, fullPage: true });
+}
+
+/** Reads the test server's database (read-only); facts no API hands out come from here. */
+export function dbAll<T>(sql: string, params: unknown[] = []): Promise<T[]> {
+	return new Promise((resolve, reject) => {
+		const db = new sqlite3.Database(inject('databasePath'), sqlite3.OPEN_READONLY);
+		db.all(sql, params, (err, rows) => {
+			db.close();
+			if (err) reject(err);
+			else resolve(rows as T[]);
+		});
+	});
 }

@@ -4,24 +4,12 @@
  */
 import { mkdirSync } from 'node:fs';
 import axe from 'axe-core';
-import sqlite3 from 'sqlite3';
 import type { Page } from 'playwright-core';
-import { inject } from 'vitest';
 import type { ViewportName } from './browser';
 
-export const JOURNEY_SHOTS = 'test-results/journeys';
+export { dbAll } from './browser';
 
-/** Reads the test server's database (read-only); facts no API hands out come from here. */
-export function dbAll<T>(sql: string, params: unknown[] = []): Promise<T[]> {
-	return new Promise((resolve, reject) => {
-		const db = new sqlite3.Database(inject('databasePath'), sqlite3.OPEN_READONLY);
-		db.all(sql, params, (err, rows) => {
-			db.close();
-			if (err) reject(err);
-			else resolve(rows as T[]);
-		});
-	});
-}
+export const JOURNEY_SHOTS = 'test-results/journeys';
 
 /** A full-page screenshot kept as a test artefact: `<journey>-<width>-<step>.png`. */
 export async function journeyShot(page: Page, journey: string, width: ViewportName, step: string) {

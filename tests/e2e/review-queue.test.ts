@@ -1,8 +1,7 @@
-import sqlite3 from 'sqlite3';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { waitForMail } from '../helpers/mail';
-import { launch, openPage, shot, signIn } from './browser';
+import { dbAll, launch, openPage, shot, signIn } from './browser';
 
 const TABLET = { width: 820, height: 1180 };
 // A Saturday: the demo shops log no work at weekends, so these small entries stay far below
@@ -18,18 +17,6 @@ let browser: Browser;
 let apprentice: { context: BrowserContext; page: Page };
 let ids: { dale: string; rosa: string };
 let taskIds: number[];
-
-/** Reads the test server's database; ids that no API hands out come from here. */
-function dbAll<T>(sql: string, params: unknown[] = []): Promise<T[]> {
-	return new Promise((resolve, reject) => {
-		const db = new sqlite3.Database(inject('databasePath'), sqlite3.OPEN_READONLY);
-		db.all(sql, params, (err, rows) => {
-			db.close();
-			if (err) reject(err);
-			else resolve(rows as T[]);
-		});
-	});
-}
 
 async function logEntry(label: string): Promise<{ id: number; ro: string }> {
 	const ro = `Q${RUN}-${label}`;
