@@ -63,7 +63,33 @@ const secureHeaders: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
-export const handle = sequence(refuseCrossSite, authenticate, secureHeaders);
+const FORM_TYPES = /^\s*(application\/x-www-form-urlencoded|multipart\/form-data|text\/plain)\b/i;
+
+/**
+ * A form post whose body cannot be read (a broken multipart body, or `text/plain`, which no
+ * form of ours sends) is the sender's mistake: 400 here, rather than a 500 from the
+ * `request.formData()` call in the action.
+ */
+const refuseUnreadableForms: Handle = async ({ event, resolve }) => {
+	const type = event.request.headers.get('content-type') ?? '';
+	if (
+		event.request.method === 'POST' &&
+		!event.url.pathname.startsWith('/api/') &&
+		FORM_TYPES.test(type)
+	) {
+		try {
+			await event.request.clone().formData();
+		} catch {
+			return new Response('The form could not be read. Send it again from the page.', {
+				status: 400,
+				headers: { 'content-type': 'text/plain; charset=utf-8' }
+			});
+		}
+	}
+	return resolve(event);
+};
+
+export const handle = sequence(refuseCrossSite, authenticate, secureHeaders, refuseUnreadableForms);
 
 export const handleError: HandleServerError = ({ error, event, status, message }) => {
 	const errorId = crypto.randomUUID().slice(0, 8);
