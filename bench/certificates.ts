@@ -162,7 +162,9 @@ export async function verifyThroughput(
 ): Promise<VerifyBench> {
 	const duration = options.duration ?? 10;
 	const connections = options.connections ?? 10;
-	if (!existsSync(path.join(ROOT, 'build/index.js'))) throw new Error('Run `npm run build` first.');
+	const build = process.env.BUILD_DIR || 'build';
+	if (!existsSync(path.join(ROOT, build, 'index.js')))
+		throw new Error('Run `npm run build` first.');
 	const dir = mkdtempSync(path.join(os.tmpdir(), 'journeymark-bench-cert-'));
 	const [appPort, barePort] = [await freePort(), await freePort()];
 	const env = {
@@ -192,7 +194,7 @@ export async function verifyThroughput(
 		const serial = output.match(/Certificate (JM-[0-9A-Z-]+): valid/)?.[1];
 		if (!serial) throw new Error('The demo data has no valid certificate to look up.');
 
-		children.push(spawn(process.execPath, ['build'], { cwd: ROOT, env, stdio: 'ignore' }));
+		children.push(spawn(process.execPath, [build], { cwd: ROOT, env, stdio: 'ignore' }));
 		children.push(
 			spawn(process.execPath, ['-e', BARE], {
 				env: { ...process.env, PORT: String(barePort) },

@@ -72,8 +72,8 @@ const INTAKES = ['2023-09-04', '2024-09-02', '2025-09-01', '2026-09-07'];
 const STAGGER_DAYS = 56;
 const BATCH_ROWS = 400;
 
-// The demo's programme, with a 4:1 ratio for shops of about fifteen apprentices.
-const PROGRAMME = { id: 1, ...DEMO_PROGRAMME, ratioApprentices: 4 };
+// The demo's programme, with a ratio that fits shops of about fifteen apprentices to four journeyworkers.
+const PROGRAMME = { id: 1, ...DEMO_PROGRAMME, ratioApprentices: 6 };
 
 const DAY_MS = 86_400_000;
 const isoOf = (day: number) => new Date(day * DAY_MS).toISOString().slice(0, 10);

@@ -106,28 +106,31 @@ export async function tierTotals(frameworkId: number): Promise<Record<Tier, numb
 }
 
 /**
- * Per apprentice and status, one pass over the work log in index order: hours, entries, the
- * latest day, the forecast window's sums (see `WindowSums` in the engine) and efficiency's
- * standard and actual time for each half of the window.
+ * Two passes over the work log, each in index order: totals per apprentice and status over all
+ * time, and, over the verified entries of the forecast window only, the window's sums (see
+ * `WindowSums` in the engine) with efficiency's standard and actual time for each half.
  */
 const WEEK = `CAST((julianday(e.work_date) - julianday(:windowStart)) / 7 AS INTEGER)`;
 const IN_WINDOW = `e.work_date BETWEEN :windowStart AND :today`;
-const EARLY = `e.work_date BETWEEN :windowStart AND :halfway`;
-const LATE = `e.work_date > :halfway AND e.work_date <= :today`;
-const SUMS = `SUM(e.tenths) AS tenths, COUNT(*) AS entries, MAX(e.work_date) AS lastDate,
-	COALESCE(SUM(CASE WHEN ${IN_WINDOW} THEN e.tenths END), 0) AS windowTenths,
-	COALESCE(SUM(CASE WHEN ${IN_WINDOW} THEN e.tenths * ${WEEK} * (${WINDOW} - ${WEEK}) END), 0) AS windowWeighted,
+const EARLY = `e.work_date <= :halfway`;
+const TOTALS = `SUM(e.tenths) AS tenths, COUNT(*) AS entries, MAX(e.work_date) AS lastDate`;
+const WINDOW_SUMS = `SUM(e.tenths) AS windowTenths,
+	SUM(e.tenths * ${WEEK} * (${WINDOW} - ${WEEK})) AS windowWeighted,
 	COALESCE(SUM(CASE WHEN ${EARLY} THEN e.standard_tenths END), 0) AS standardEarly,
 	COALESCE(SUM(CASE WHEN ${EARLY} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS actualEarly,
-	COALESCE(SUM(CASE WHEN ${LATE} THEN e.standard_tenths END), 0) AS standardLate,
-	COALESCE(SUM(CASE WHEN ${LATE} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS actualLate`;
+	COALESCE(SUM(CASE WHEN NOT ${EARLY} THEN e.standard_tenths END), 0) AS standardLate,
+	COALESCE(SUM(CASE WHEN NOT ${EARLY} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS actualLate`;
 
-interface StatusRow {
+interface TotalRow {
 	id: string;
 	status: string;
 	tenths: number;
 	entries: number;
 	lastDate: string;
+}
+
+interface WindowRow {
+	id: string;
 	windowTenths: number;
 	windowWeighted: number;
 	standardEarly: number;
@@ -135,6 +138,8 @@ interface StatusRow {
 	standardLate: number;
 	actualLate: number;
 }
+
+type ReplacedRow = TotalRow & WindowRow;
 
 interface MetRow {
 	id: string;
@@ -159,15 +164,16 @@ interface SiteDayRow {
 }
 
 export interface Raw {
-	statuses: StatusRow[];
+	totals: TotalRow[];
+	window: WindowRow[];
 	/** Verified entries a verified correction replaced: taken off again. */
-	replaced: StatusRow[];
+	replaced: ReplacedRow[];
 	met: MetRow[];
 	rti: RtiRow[];
 	siteDays: SiteDayRow[];
 }
 
-/** The five aggregate queries, run together; SQLite serialises them on one connection. */
+/** The six aggregate queries, run together on two connections. */
 export async function fetchRaw(scope: Scope, frameworkId: number, today: string): Promise<Raw> {
 	const e = scopeSql(scope, 'e.apprentice_id');
 	const s = scopeSql(scope, 's.apprentice_id');
@@ -181,18 +187,31 @@ export async function fetchRaw(scope: Scope, frameworkId: number, today: string)
 		ratioSince: addDays(today, -(RATIO_DAYS - 1)),
 		today
 	};
-	const [statuses, replaced, met, rti, siteDays] = await Promise.all([
-		select<StatusRow>(
-			`SELECT e.apprentice_id AS id, e.status, ${SUMS}
+	const [totals, window, replaced, met, rti, siteDays] = await Promise.all([
+		// The two heaviest queries run on the second connection while the others run here.
+		select<TotalRow>(
+			`SELECT e.apprentice_id AS id, e.status, ${TOTALS}
 			   FROM log_entries e ${e.join}
 			  WHERE ${e.sql}
 			  GROUP BY e.apprentice_id, e.status`,
 			replacements,
-			// The longest query runs on the second connection while the others run here.
 			reader
 		),
-		select<StatusRow>(
-			`SELECT e.apprentice_id AS id, e.status, ${SUMS}
+		select<WindowRow>(
+			`SELECT e.apprentice_id AS id, ${WINDOW_SUMS}
+			   FROM log_entries e ${e.join}
+			  WHERE ${e.sql} AND e.status = 'verified' AND ${IN_WINDOW}
+			  GROUP BY e.apprentice_id`,
+			replacements
+		),
+		select<ReplacedRow>(
+			`SELECT e.apprentice_id AS id, e.status, ${TOTALS},
+			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} THEN e.tenths END), 0) AS windowTenths,
+			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} THEN e.tenths * ${WEEK} * (${WINDOW} - ${WEEK}) END), 0) AS windowWeighted,
+			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} AND ${EARLY} THEN e.standard_tenths END), 0) AS standardEarly,
+			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} AND ${EARLY} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS actualEarly,
+			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} AND NOT ${EARLY} THEN e.standard_tenths END), 0) AS standardLate,
+			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} AND NOT ${EARLY} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS actualLate
 			   FROM log_entries c JOIN log_entries e ON e.id = c.corrects_id ${e.join}
 			  WHERE c.corrects_id IS NOT NULL AND c.status = 'verified' AND e.status = 'verified'
 			    AND ${e.sql}
@@ -215,7 +234,8 @@ export async function fetchRaw(scope: Scope, frameworkId: number, today: string)
 			   JOIN framework_tasks t ON t.framework_id = :frameworkId AND t.code = st.code
 			   JOIN framework_areas a ON a.id = t.area_id
 			  GROUP BY st.apprentice_id, a.code, t.tier`,
-			replacements
+			replacements,
+			reader
 		),
 		select<RtiRow>(
 			`SELECT r.apprentice_id AS id,
@@ -238,7 +258,7 @@ export async function fetchRaw(scope: Scope, frameworkId: number, today: string)
 			replacements
 		)
 	]);
-	return { statuses, replaced, met, rti, siteDays };
+	return { totals, window, replaced, met, rti, siteDays };
 }
 
 /** Days each site had more apprentices on the floor than its journeyworkers allow. */
@@ -295,26 +315,33 @@ export function assemble(
 			areas: new Map()
 		});
 	}
-	for (const [rows, sign] of [
-		[raw.statuses, 1],
-		[raw.replaced, -1]
-	] as const) {
-		for (const r of rows) {
-			const f = out.get(r.id)?.facts;
-			if (!f) continue;
-			if (r.status === 'submitted') f.pendingTenths += r.tenths;
-			else if (r.status === 'returned') f.returnedOpen += r.entries;
-			else if (r.status === 'verified') {
-				f.verifiedTenths += sign * r.tenths;
-				if (sign > 0) f.lastVerifiedDate = r.lastDate;
-				f.window.tenths += sign * r.windowTenths;
-				f.window.weighted += sign * r.windowWeighted;
-				f.standard[0] += sign * r.standardEarly;
-				f.standard[1] += sign * r.standardLate;
-				f.actual[0] += sign * r.actualEarly;
-				f.actual[1] += sign * r.actualLate;
-			}
+	for (const r of raw.totals) {
+		const f = out.get(r.id)?.facts;
+		if (!f) continue;
+		if (r.status === 'submitted') f.pendingTenths += r.tenths;
+		else if (r.status === 'returned') f.returnedOpen += r.entries;
+		else if (r.status === 'verified') {
+			f.verifiedTenths += r.tenths;
+			f.lastVerifiedDate = r.lastDate;
 		}
+	}
+	const addWindow = (f: ApprenticeFacts, w: WindowRow, sign: 1 | -1) => {
+		f.window.tenths += sign * w.windowTenths;
+		f.window.weighted += sign * w.windowWeighted;
+		f.standard[0] += sign * w.standardEarly;
+		f.standard[1] += sign * w.standardLate;
+		f.actual[0] += sign * w.actualEarly;
+		f.actual[1] += sign * w.actualLate;
+	};
+	for (const w of raw.window) {
+		const f = out.get(w.id)?.facts;
+		if (f) addWindow(f, w, 1);
+	}
+	for (const r of raw.replaced) {
+		const f = out.get(r.id)?.facts;
+		if (!f) continue;
+		f.verifiedTenths -= r.tenths;
+		addWindow(f, r, -1);
 	}
 	for (const m of raw.met) {
 		const entry = out.get(m.id);
