@@ -4,11 +4,10 @@ import { Op } from 'sequelize';
 import { beforeAll, describe, expect, it } from 'vitest';
 import * as assessment from '$lib/server/assessment';
 import type { SignedInUser } from '$lib/server/auth';
-import { ApprenticeProfile, Cohort, prepare, sequelize, SignOff, Task, User } from '$lib/server/db';
+import { ApprenticeProfile, Cohort, prepare, sequelize, Task, User } from '$lib/server/db';
 import { safeCell } from '$lib/server/exports/csv';
 import * as framework from '$lib/server/framework';
 import * as progress from '$lib/server/progress';
-import * as worklog from '$lib/server/worklog';
 import * as rti from '$lib/server/worklog/rti';
 import { seedDemo } from '../../seed/demo';
 import { GET as apprenticeCsvGet } from '../../src/routes/api/apprentices/[id]/record.csv/+server';
@@ -16,6 +15,7 @@ import { GET as apprenticePdfGet } from '../../src/routes/api/apprentices/[id]/r
 import { GET as cohortCsvGet } from '../../src/routes/api/cohorts/[id]/record.csv/+server';
 import { GET as cohortPdfGet } from '../../src/routes/api/cohorts/[id]/record.pdf/+server';
 import { byRole } from '../helpers/accounts';
+import * as records from '../helpers/records';
 
 type Handler = (event: never) => Promise<Response>;
 type Row = Record<string, string>;
@@ -46,42 +46,17 @@ async function call(handler: Handler, id: string, user: SignedInUser | null) {
 const rows = async (response: Response): Promise<Row[]> =>
 	parse(Buffer.from(await response.arrayBuffer()), { bom: true, columns: true }) as Row[];
 
-async function logHours(day: string, hours: number, verify: boolean, taskId: number) {
-	const entry = await worklog.create(
-		apprentice,
-		{
-			workDate: day,
-			hours,
-			repairOrder: `RO-${day.replaceAll('-', '')}`,
-			vehicleMake: 'Compact hatch',
-			vehicleModel: 'base',
-			vinOverride: false,
-			odometerUnit: 'mi',
-			supervisorId: supervisor.id,
-			notes: '',
-			tasks: [{ taskId, hours }]
-		},
-		'submit'
-	);
-	if (verify) await worklog.verify(supervisor, [entry.id]);
-}
+const logHours = (day: string, hours: number, verify: boolean, taskId: number) =>
+	records.logHours(apprentice, supervisor, { day, hours, verify, taskId });
 
 async function signOff(taskId: number, level: 1 | 2 | 3 | 4, day: string) {
 	const current = (await framework.current())!;
-	return SignOff.create({
-		kind: 'sign-off',
+	return records.signOffRow({
 		apprenticeId: apprentice.id,
+		supervisorId: supervisor.id,
 		taskId,
 		frameworkId: current.id,
-		supervisorId: supervisor.id,
 		level,
-		results: null,
-		quizAttemptId: null,
-		verifiedTenths: 0,
-		refersToId: null,
-		reason: null,
-		sessionHash: 'test',
-		contentHash: `test-${taskId}-${level}`,
 		signedAt: new Date(`${day}T10:00:00Z`)
 	});
 }

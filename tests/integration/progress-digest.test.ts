@@ -6,11 +6,11 @@ import { ApprenticeProfile, Cohort, prepare, Programme, Task, User } from '$lib/
 import * as framework from '$lib/server/framework';
 import * as progress from '$lib/server/progress';
 import * as digest from '$lib/server/progress-digest';
-import * as worklog from '$lib/server/worklog';
 import { seedDemo } from '../../seed/demo';
 import { actions } from '../../src/routes/(coordinator)/coordinator/digest/+page.server';
 import { waitForMail } from '../helpers/mail';
 import { byRole } from '../helpers/accounts';
+import { logHours } from '../helpers/records';
 
 const run = promisify(execFile);
 
@@ -22,25 +22,8 @@ let steps: { fromHours: number; percent: number }[];
 const today = new Date().toISOString().slice(0, 10);
 const daysAgo = (n: number) => new Date(Date.now() - n * 86_400_000).toISOString().slice(0, 10);
 
-async function log(day: string, hours: number, verify: boolean) {
-	const entry = await worklog.create(
-		apprentice,
-		{
-			workDate: day,
-			hours,
-			repairOrder: `RO-${day.replaceAll('-', '')}`,
-			vehicleMake: 'Light pickup',
-			vehicleModel: 'base',
-			vinOverride: false,
-			odometerUnit: 'mi',
-			supervisorId: supervisor.id,
-			notes: '',
-			tasks: [{ taskId, hours }]
-		},
-		'submit'
-	);
-	if (verify) await worklog.verify(supervisor, [entry.id]);
-}
+const log = (day: string, hours: number, verify: boolean) =>
+	logHours(apprentice, supervisor, { day, hours, verify, taskId, make: 'Light pickup' });
 
 beforeAll(async () => {
 	await prepare();

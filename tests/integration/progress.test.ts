@@ -11,7 +11,6 @@ import {
 	Programme,
 	RtiRecord,
 	sequelize,
-	SignOff,
 	Task,
 	User
 } from '$lib/server/db';
@@ -27,6 +26,7 @@ import {
 import { seedDemo } from '../../seed/demo';
 import { call } from '../helpers/route';
 import { byRole } from '../helpers/accounts';
+import { signOffRow } from '../helpers/records';
 
 const TODAY = '2026-12-02';
 let apprentice: SignedInUser;
@@ -71,29 +71,22 @@ async function entry(
 	return e;
 }
 
-async function signOff(
+const signOff = (
 	task: Task,
 	level: 1 | 2 | 3 | 4,
 	refersToId: number | null = null,
 	kind: 'sign-off' | 'revocation' = 'sign-off'
-) {
-	return SignOff.create({
-		kind,
+) =>
+	signOffRow({
 		apprenticeId: apprentice.id,
+		supervisorId: supervisor.id,
 		taskId: task.id,
 		frameworkId: task.frameworkId,
-		supervisorId: supervisor.id,
-		level: kind === 'revocation' ? null : level,
-		results: null,
-		quizAttemptId: null,
-		verifiedTenths: 0,
+		level,
+		kind,
 		refersToId,
-		reason: kind === 'revocation' ? 'Recorded against the wrong apprentice.' : null,
-		sessionHash: 'test',
-		contentHash: `test-${task.id}-${level}-${kind}`,
 		signedAt: new Date('2026-11-01T10:00:00Z')
-	} as never);
-}
+	});
 
 beforeAll(async () => {
 	await prepare();
