@@ -1,4 +1,4 @@
-import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
+import { error, type Handle, type HandleServerError, type ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { lucia } from '$lib/server/auth';
 import { ring } from '$lib/server/certificates/keys';
@@ -63,28 +63,22 @@ const secureHeaders: Handle = async ({ event, resolve }) => {
 	return response;
 };
 
-const FORM_TYPES = /^\s*(application\/x-www-form-urlencoded|multipart\/form-data|text\/plain)\b/i;
-
 /**
  * A form post whose body cannot be read (a broken multipart body, or `text/plain`, which no
- * form of ours sends) is the sender's mistake: 400 here, rather than a 500 from the
- * `request.formData()` call in the action.
+ * form of ours sends) is the sender's mistake. Every action reads its body through
+ * `request.formData()`; wrapping that one call turns its failure into a 400 rather than a 500,
+ * without parsing any body twice.
  */
 const refuseUnreadableForms: Handle = async ({ event, resolve }) => {
-	const type = event.request.headers.get('content-type') ?? '';
-	if (
-		event.request.method === 'POST' &&
-		!event.url.pathname.startsWith('/api/') &&
-		FORM_TYPES.test(type)
-	) {
-		try {
-			await event.request.clone().formData();
-		} catch {
-			return new Response('The form could not be read. Send it again from the page.', {
-				status: 400,
-				headers: { 'content-type': 'text/plain; charset=utf-8' }
-			});
-		}
+	if (event.request.method === 'POST' && !event.url.pathname.startsWith('/api/')) {
+		const read = event.request.formData.bind(event.request);
+		event.request.formData = async () => {
+			try {
+				return await read();
+			} catch {
+				error(400, 'The form could not be read. Send it again from the page.');
+			}
+		};
 	}
 	return resolve(event);
 };
