@@ -144,12 +144,6 @@ export function allowedApprentices(rule: RatioRule, journeyworkers: number): num
 	return 1 + Math.floor((journeyworkers - 1) / rule.every);
 }
 
-export function describeRatio(rule: RatioRule): string {
-	return rule.kind === 'fixed'
-		? `${rule.apprentices} apprentice${rule.apprentices === 1 ? '' : 's'} per ${rule.journeyworkers} journeyworker${rule.journeyworkers === 1 ? '' : 's'}`
-		: `1 apprentice for the first journeyworker, 1 more for every ${rule.every} more`;
-}
-
 export interface WageStanding {
 	/** Index into the schedule; -1 before the first step applies. */
 	index: number;
