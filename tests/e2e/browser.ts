@@ -44,7 +44,8 @@ export async function openPage(browser: Browser, viewport: ViewportName = 'deskt
 }
 
 export async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
-	await page.goto('/login');
+	// Wait for the page's scripts so the form submits the same way every time.
+	await page.goto('/login', { waitUntil: 'networkidle' });
 	await page.getByLabel('E-mail').fill(email);
 	await page.getByLabel('Password').fill(password);
 	await Promise.all([

@@ -106,8 +106,12 @@ describe('sessions (OWASP ASVS 4.0.3 V3)', () => {
 				await new Promise((r) => setTimeout(r, 200));
 			}
 		});
-		afterAll(() => {
+		afterAll(async () => {
+			// Wait for the second instance to be gone before the next file uses the database.
+			const exited =
+				server && server.exitCode === null ? new Promise((r) => server!.once('exit', r)) : null;
 			server?.kill('SIGTERM');
+			await exited;
 		});
 
 		it('marks the session cookie Secure (V3.4.1)', async () => {
