@@ -1,12 +1,5 @@
-import { QueryTypes } from 'sequelize';
 import type { Approach } from './db/models/Programme';
-import { sequelize } from './db';
-import { COUNTED } from './db/sql';
-
-const select = <T extends object>(
-	sql: string,
-	replacements: Record<string, unknown> = {}
-): Promise<T[]> => sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements });
+import { COUNTED, select } from './db/sql';
 
 export interface ApprenticeRecord {
 	name: string;

@@ -1,4 +1,13 @@
-/** SQL conditions every aggregate shares, so every screen counts the same way. */
+/** Raw SELECTs and the SQL conditions every aggregate shares, so every screen counts the same way. */
+import { QueryTypes, type Sequelize } from 'sequelize';
+import { sequelize } from '.';
+
+/** Runs a SELECT with named replacements and returns its rows (on `db`, the main connection by default). */
+export const select = <T extends object>(
+	sql: string,
+	replacements: Record<string, unknown> = {},
+	db: Sequelize = sequelize
+): Promise<T[]> => db.query<T>(sql, { type: QueryTypes.SELECT, replacements });
 
 /**
  * A verified entry counts unless a verified correction has replaced it. Used wherever verified

@@ -3,9 +3,8 @@
  * apprentice or a whole cohort alike: the cost grows with the rows scanned, never with one query
  * per apprentice.
  */
-import { QueryTypes } from 'sequelize';
-import { reader, sequelize } from '../db';
-import { STANDING } from '../db/sql';
+import { reader } from '../db';
+import { select, STANDING } from '../db/sql';
 import type { Programme } from '../db/models/Programme';
 import type { ApprenticeFacts, ProgrammeRules, RatioRule, Tier, TierCounts } from './engine';
 import { addDays, allowedApprentices, WINDOW } from './engine';
@@ -18,12 +17,6 @@ export interface Scope {
 	cohortId?: number | null;
 	apprenticeId?: string;
 }
-
-const select = <T extends object>(
-	sql: string,
-	replacements: Record<string, unknown>,
-	db = sequelize
-) => db.query<T>(sql, { type: QueryTypes.SELECT, replacements });
 
 function scopeSql(scope: Scope, column: string) {
 	if (scope.apprenticeId) return { sql: `${column} = :apprenticeId`, join: '' };
@@ -156,7 +149,7 @@ interface RtiRow {
 	tenths: number;
 }
 
-interface SiteDayRow {
+export interface SiteDayRow {
 	siteId: number;
 	day: string;
 	apprentices: number;
@@ -187,7 +180,7 @@ export async function fetchRaw(scope: Scope, frameworkId: number, today: string)
 		ratioSince: addDays(today, -(RATIO_DAYS - 1)),
 		today
 	};
-	const [totals, window, replaced, met, rti, siteDays] = await Promise.all([
+	const [totals, window, replaced, met, rti, days] = await Promise.all([
 		// The two heaviest queries run on the second connection while the others run here.
 		select<TotalRow>(
 			`SELECT e.apprentice_id AS id, e.status, ${TOTALS}
@@ -247,18 +240,26 @@ export async function fetchRaw(scope: Scope, frameworkId: number, today: string)
 			  GROUP BY r.apprentice_id, year`,
 			replacements
 		),
-		select<SiteDayRow>(
-			`SELECT u.site_id AS siteId, e.work_date AS day,
-			        COUNT(DISTINCT e.apprentice_id) AS apprentices,
-			        COUNT(DISTINCT e.supervisor_id) AS journeyworkers
-			   FROM log_entries e JOIN users u ON u.id = e.apprentice_id
-			  WHERE e.work_date BETWEEN :ratioSince AND :today
-			    AND e.status IN ('submitted', 'verified') AND u.site_id IS NOT NULL
-			  GROUP BY u.site_id, e.work_date`,
-			replacements
-		)
+		siteDays(replacements.ratioSince, today)
 	]);
-	return { totals, window, replaced, met, rti, siteDays };
+	return { totals, window, replaced, met, rti, siteDays: days };
+}
+
+/**
+ * Per shop and day: apprentices who logged work, and the journeyworkers who supervised it —
+ * the two sides of the ratio.
+ */
+export function siteDays(since: string, today: string): Promise<SiteDayRow[]> {
+	return select<SiteDayRow>(
+		`SELECT u.site_id AS siteId, e.work_date AS day,
+		        COUNT(DISTINCT e.apprentice_id) AS apprentices,
+		        COUNT(DISTINCT e.supervisor_id) AS journeyworkers
+		   FROM log_entries e JOIN users u ON u.id = e.apprentice_id
+		  WHERE e.work_date BETWEEN :since AND :today
+		    AND e.status IN ('submitted', 'verified') AND u.site_id IS NOT NULL
+		  GROUP BY u.site_id, e.work_date`,
+		{ since, today }
+	);
 }
 
 /** Days each site had more apprentices on the floor than its journeyworkers allow. */

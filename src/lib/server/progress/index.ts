@@ -2,10 +2,8 @@
  * Progress of apprentices: the service the dashboards, APIs, exports and certificates share.
  * It fetches facts with `data.ts` and leaves every rule to the pure `engine.ts`.
  */
-import { QueryTypes } from 'sequelize';
-import { sequelize } from '../db';
 import { Cohort, Programme } from '../db';
-import { COUNTED } from '../db/sql';
+import { COUNTED, select } from '../db/sql';
 import * as framework from '../framework';
 import * as assessment from '../assessment';
 import * as data from './data';
@@ -23,9 +21,6 @@ import type { AreaStanding, CoveredTask, Qualification } from './qualification-t
 
 export type { Progress, ProgrammeRules } from './engine';
 export type { Qualification } from './qualification-types';
-
-const select = <T extends object>(sql: string, replacements: Record<string, unknown>) =>
-	sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements });
 
 export interface AreaTotal {
 	code: string;
@@ -318,16 +313,7 @@ export async function burnUp(cohortId: number | 'all', today = isoDate(new Date(
 export async function ratioBySite(weeks = 26, today = isoDate(new Date())) {
 	const since = addDays(today, -(weeks * 7 - 1));
 	const [rows, sites, rules] = await Promise.all([
-		select<{ siteId: number; day: string; apprentices: number; journeyworkers: number }>(
-			`SELECT u.site_id AS siteId, e.work_date AS day,
-			        COUNT(DISTINCT e.apprentice_id) AS apprentices,
-			        COUNT(DISTINCT e.supervisor_id) AS journeyworkers
-			   FROM log_entries e JOIN users u ON u.id = e.apprentice_id
-			  WHERE e.work_date BETWEEN :since AND :today AND e.status IN ('submitted', 'verified')
-			    AND u.site_id IS NOT NULL
-			  GROUP BY u.site_id, e.work_date`,
-			{ since, today }
-		),
+		data.siteDays(since, today),
 		select<{ id: number; code: string; name: string }>(
 			`SELECT id, code, name FROM sites ORDER BY code`,
 			{}

@@ -1,8 +1,5 @@
-import { QueryTypes } from 'sequelize';
-import { sequelize, type EntryStatus } from '../db';
-
-const select = <T extends object>(sql: string, replacements: Record<string, unknown>) =>
-	sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements });
+import type { EntryStatus } from '../db';
+import { select } from '../db/sql';
 
 export interface EntrySummary {
 	id: number;
