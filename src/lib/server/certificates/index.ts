@@ -21,6 +21,7 @@ import { config } from '../config';
 import { Certificate, User, write } from '../db';
 import * as mail from '../mail';
 import { qualification } from '../progress';
+import { storageFromConfig } from '../storage';
 import { EntryProblem } from '../worklog/errors';
 import { buildContent, missingFor, type CertificateContent, type Scope } from './content';
 import {
@@ -264,6 +265,22 @@ export async function bySerial(serial: string) {
 export async function pdfFor(certificate: Certificate, paper: Paper): Promise<Uint8Array> {
 	// The signature in the name: a rebuilt database reusing a serial never gets an old file.
 	const version = createHash('sha256').update(certificate.signature).digest('hex').slice(0, 16);
+	const draw = () =>
+		render(
+			JSON.parse(certificate.content) as CertificateContent,
+			verifyUrl(certificate.serial),
+			paper
+		);
+	if (config.STORAGE === 's3') {
+		// Storage keys are lower-case; a serial holds only letters, digits and hyphens.
+		const key = `${certificate.serial}-${paper}-${version}`.toLowerCase();
+		const store = storageFromConfig('certificates');
+		const cached = await store.get(key);
+		if (cached) return cached;
+		const bytes = await draw();
+		await store.put(key, bytes, 'application/pdf');
+		return bytes;
+	}
 	const file = path.resolve(
 		config.CERTIFICATES_DIR,
 		`${certificate.serial}-${paper}-${version}.pdf`
@@ -273,8 +290,7 @@ export async function pdfFor(certificate: Certificate, paper: Paper): Promise<Ui
 	} catch {
 		// not rendered yet
 	}
-	const content = JSON.parse(certificate.content) as CertificateContent;
-	const bytes = await render(content, verifyUrl(certificate.serial), paper);
+	const bytes = await draw();
 	await mkdir(path.dirname(file), { recursive: true });
 	const temporary = `${file}.${process.pid}.${randomInt(1e9)}.part`;
 	await writeFile(temporary, bytes);

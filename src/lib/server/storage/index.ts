@@ -1,78 +1,79 @@
-import { randomUUID } from 'node:crypto';
-import { mkdir, open, readFile, rename, rm } from 'node:fs/promises';
+import { constants } from 'node:fs';
+import { access, mkdir } from 'node:fs/promises';
 import path from 'node:path';
+import type { S3Client } from '@aws-sdk/client-s3';
+import { config } from '../config';
+import { localDisk, type Storage } from './local';
+import { checkBucket, s3Client, s3Storage, type S3Options } from './s3';
 
-/** Where uploaded bytes live. Keys are made by the caller from random ids, never from user input. */
-export interface Storage {
-	put(key: string, bytes: Uint8Array, contentType: string): Promise<void>;
-	get(key: string): Promise<Buffer | null>;
-	delete(key: string): Promise<void>;
-}
+export { assertKey, localDisk, type Storage } from './local';
+export {
+	checkBucket,
+	s3Client,
+	s3Storage,
+	CHECK_TIMEOUT_MS,
+	type S3Options,
+	type S3StorageOptions
+} from './s3';
 
-// Lower-case letters, digits and hyphens in '/'-separated segments: no dots, so no '..'.
-const KEY_PATTERN = /^[a-z0-9-]+(\/[a-z0-9-]+)*$/;
-const MAX_KEY_LENGTH = 200;
+/** What is stored: uploaded evidence and photos, or the rendered certificate PDFs (a cache). */
+export type StorageArea = 'uploads' | 'certificates';
 
-/** Throws unless the key is safe to use as a path below the root. */
-export function assertKey(key: string): void {
-	if (typeof key !== 'string' || key.length > MAX_KEY_LENGTH || !KEY_PATTERN.test(key)) {
-		throw new Error(`Refused storage key ${JSON.stringify(String(key).slice(0, 80))}.`);
-	}
-}
-
-function isMissing(error: unknown): boolean {
-	return (error as NodeJS.ErrnoException)?.code === 'ENOENT';
-}
-
-/** Files under `root` (the app passes `config.UPLOADS_DIR`, outside the web root). */
-export function localDisk(root: string): Storage {
-	const base = path.resolve(root);
-
-	function pathOf(key: string): string {
-		assertKey(key);
-		const file = path.resolve(base, key);
-		// The pattern already rules out traversal; this second check costs nothing.
-		if (!file.startsWith(base + path.sep)) throw new Error('Refused storage key outside the root.');
-		return file;
-	}
-
+function s3Options(): S3Options {
 	return {
-		// Local files need no content type: the evidence record keeps it for serving.
-		async put(key, bytes) {
-			const file = pathOf(key);
-			await mkdir(path.dirname(file), { recursive: true });
-			// A temp name with a dot can never collide with a key; rename makes the write all-or-nothing.
-			const temp = `${file}.${randomUUID()}.tmp`;
-			const handle = await open(temp, 'wx', 0o600);
-			try {
-				await handle.writeFile(bytes);
-				await handle.sync();
-			} catch (error) {
-				await handle.close();
-				await rm(temp, { force: true });
-				throw error;
-			}
-			await handle.close();
-			try {
-				await rename(temp, file);
-			} catch (error) {
-				await rm(temp, { force: true });
-				throw error;
-			}
-		},
-
-		async get(key) {
-			try {
-				return await readFile(pathOf(key));
-			} catch (error) {
-				if (isMissing(error)) return null;
-				throw error;
-			}
-		},
-
-		async delete(key) {
-			// Deleting what is already gone is not an error: retries and clean-ups stay simple.
-			await rm(pathOf(key), { force: true });
-		}
+		bucket: config.S3_BUCKET!,
+		endpoint: config.S3_ENDPOINT,
+		region: config.S3_REGION,
+		accessKeyId: config.S3_ACCESS_KEY_ID,
+		secretAccessKey: config.S3_SECRET_ACCESS_KEY,
+		forcePathStyle: config.S3_FORCE_PATH_STYLE === 'true'
 	};
+}
+
+let client: S3Client | undefined;
+const shared = new Map<StorageArea, Storage>();
+
+/**
+ * The storage the settings choose (`STORAGE`), one per area for the process. In a bucket, uploads
+ * keep the same keys as on disk and certificate PDFs sit below `certificates/`.
+ */
+export function storageFromConfig(area: StorageArea = 'uploads'): Storage {
+	let storage = shared.get(area);
+	if (!storage) {
+		if (config.STORAGE === 's3') {
+			const options = s3Options();
+			client ??= s3Client(options);
+			storage = s3Storage({
+				...options,
+				client,
+				prefix: area === 'certificates' ? 'certificates' : undefined
+			});
+		} else {
+			storage = localDisk(area === 'certificates' ? config.CERTIFICATES_DIR : config.UPLOADS_DIR);
+		}
+		shared.set(area, storage);
+	}
+	return storage;
+}
+
+/**
+ * Refuses to go on when the configured storage cannot be used: for a bucket, one HeadBucket with a
+ * short timeout (nothing created, nothing written); on disk, the folders must be writable.
+ */
+export async function checkStorage(): Promise<void> {
+	if (config.STORAGE === 's3') {
+		await checkBucket(s3Options());
+		return;
+	}
+	for (const dir of [config.UPLOADS_DIR, config.CERTIFICATES_DIR]) {
+		const full = path.resolve(dir);
+		try {
+			await mkdir(full, { recursive: true });
+			await access(full, constants.W_OK);
+		} catch (error) {
+			throw new Error(`Storage folder "${full}" cannot be written: ${(error as Error).message}`, {
+				cause: error
+			});
+		}
+	}
 }

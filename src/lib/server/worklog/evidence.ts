@@ -1,16 +1,15 @@
 import { randomUUID } from 'node:crypto';
 import type { SignedInUser } from '../auth';
-import { config } from '../config';
 import { Evidence, LogEntry, write } from '../db';
 import { processUpload } from '../evidence';
-import { localDisk } from '../storage';
+import { storageFromConfig } from '../storage';
 import { canView } from './access';
 import { EntryProblem, notFound } from './errors';
 
 export const MAX_FILES_PER_ENTRY = 10;
 export const MAX_UPLOAD_BYTES = 10 * 1024 * 1024;
 
-export const storage = () => localDisk(config.UPLOADS_DIR);
+export const storage = () => storageFromConfig('uploads');
 
 /** Stores a photo or PDF on the apprentice's own entry, re-encoded and stripped of metadata. */
 export async function attach(
