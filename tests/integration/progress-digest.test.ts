@@ -1,18 +1,41 @@
 import { execFile } from 'node:child_process';
+import { readdir, readFile } from 'node:fs/promises';
+import path from 'node:path';
 import { promisify } from 'node:util';
+import { QueryTypes } from 'sequelize';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { SignedInUser } from '$lib/server/auth';
-import { ApprenticeProfile, Cohort, prepare, Programme, Task, User } from '$lib/server/db';
+import {
+	ApprenticeProfile,
+	Cohort,
+	prepare,
+	Programme,
+	sequelize,
+	Task,
+	User
+} from '$lib/server/db';
 import * as framework from '$lib/server/framework';
 import * as progress from '$lib/server/progress';
 import * as digest from '$lib/server/progress-digest';
 import { seedDemo } from '../../seed/demo';
 import { actions } from '../../src/routes/(coordinator)/coordinator/digest/+page.server';
+import type { StoredMail } from '../../fakes/smtp';
 import { waitForMail } from '../helpers/mail';
 import { byRole } from '../helpers/accounts';
 import { logHours } from '../helpers/records';
 
 const run = promisify(execFile);
+
+/** How many weekly digests the fake SMTP server holds for `to`. */
+async function digestsTo(to: string): Promise<number> {
+	const dir = process.env.FAKE_MAIL_DIR!;
+	let n = 0;
+	for (const name of await readdir(dir)) {
+		const mail = JSON.parse(await readFile(path.join(dir, name), 'utf8')) as StoredMail;
+		if (mail.to.includes(to) && mail.subject.startsWith('Week of ')) n++;
+	}
+	return n;
+}
 
 let apprentice: SignedInUser;
 let supervisor: SignedInUser;
@@ -145,10 +168,40 @@ describe('weekly coordinator digest', () => {
 		await expect(actions.send(event(apprentice))).rejects.toMatchObject({ status: 403 });
 	});
 
+	it('sends the Monday digest once when several instances try at the same moment', async () => {
+		const monday = new Date(2026, 11, 7, 9, 30);
+		expect(digest.weekOf(monday)).toBe('2026-12-07');
+		expect(digest.weekOf(new Date(2026, 11, 13, 23, 59))).toBe('2026-12-07');
+		expect(digest.weekOf(new Date(2026, 11, 14, 0, 1))).toBe('2026-12-14');
+		const before = await digestsTo(coordinator.email);
+		const results = await Promise.all([
+			digest.sendWeeklyDigest(monday),
+			digest.sendWeeklyDigest(monday),
+			digest.sendWeeklyDigest(new Date(2026, 11, 7, 9, 45))
+		]);
+		expect(results.filter((r) => r === 1)).toHaveLength(1);
+		expect(results.filter((r) => r === null)).toHaveLength(2);
+		// Later in the same week nothing more goes out.
+		expect(await digest.sendWeeklyDigest(new Date(2026, 11, 9, 8, 0))).toBeNull();
+		expect(await digestsTo(coordinator.email)).toBe(before + 1);
+		const [row] = await sequelize.query<{ recipients: number }>(
+			"SELECT recipients FROM coordinator_digests WHERE week = '2026-12-07'",
+			{ type: QueryTypes.SELECT }
+		);
+		expect(Number(row.recipients)).toBe(1);
+	});
+
 	it('runs as `npm run digest` on the same settings, and exits non-zero when mail fails', async () => {
 		const env = { ...process.env, DAILY_JOBS: 'off' };
 		const ok = await run('npm', ['run', '--silent', 'digest'], { env });
 		expect(ok.stdout).toContain('Weekly digest sent to 1 coordinator.');
+		// `--once` claims the week like the Monday job: the second run sends nothing.
+		const first = await run('npm', ['run', '--silent', 'digest', '--', '--once'], { env });
+		expect(first.stdout).toContain('Weekly digest sent to 1 coordinator.');
+		const second = await run('npm', ['run', '--silent', 'digest', '--', '--once'], { env });
+		expect(second.stdout).toContain(
+			`The digest for the week of ${digest.weekOf()} was already sent.`
+		);
 		const broken = run('npm', ['run', '--silent', 'digest'], {
 			env: { ...env, SMTP_URL: 'smtp://127.0.0.1:9' }
 		});

@@ -1,10 +1,11 @@
 /**
  * The weekly coordinator digest: apprentices at risk and why, entries waiting for journeyworkers,
  * and wage steps falling due in the next two weeks, e-mailed to every active coordinator.
- * Run by `npm run digest`, the Monday job in `schedule.ts` and a button in development.
+ * Run by the Monday job in `schedule.ts` (claimed per week, see `sendWeeklyDigest`),
+ * `npm run digest` and a button in development.
  */
 import { QueryTypes } from 'sequelize';
-import { sequelize, User } from './db';
+import { sequelize, User, write } from './db';
 import * as mail from './mail';
 import * as progress from './progress';
 
@@ -54,21 +55,31 @@ const addDays = (date: string, days: number) =>
 /** What this week's digest says, with a fixed number of queries whatever the head count. */
 export async function gather(today = new Date().toISOString().slice(0, 10)): Promise<Digest> {
 	const until = addDays(today, DUE_WITHIN_DAYS);
-	const [{ rows }, waiting] = await Promise.all([
+	const [{ rows }, waitingRows] = await Promise.all([
 		progress.compute({ cohortId: null }, today),
-		sequelize.query<Waiting>(
-			`SELECT e.supervisor_id AS journeyworkerId, s.name AS journeyworker, COUNT(*) AS entries,
-			        substr(MIN(COALESCE(e.submitted_at, e.created_at)), 1, 10) AS oldestSubmitted,
-			        MIN(e.work_date) AS oldestWorkDate
+		sequelize.query<Record<keyof Waiting, unknown>>(
+			`SELECT e.supervisor_id AS "journeyworkerId", s.name AS journeyworker, COUNT(*) AS entries,
+			        MIN(COALESCE(e.submitted_at, e.created_at)) AS "oldestSubmitted",
+			        MIN(e.work_date) AS "oldestWorkDate"
 			   FROM log_entries e
 			   JOIN users s ON s.id = e.supervisor_id
-			   JOIN users a ON a.id = e.apprentice_id AND a.active = 1
+			   JOIN users a ON a.id = e.apprentice_id AND a.active = :active
 			  WHERE e.status = 'submitted'
-			  GROUP BY e.supervisor_id
-			  ORDER BY oldestSubmitted, s.name`,
-			{ type: QueryTypes.SELECT }
+			  GROUP BY e.supervisor_id, s.name
+			  ORDER BY "oldestSubmitted", s.name`,
+			{ type: QueryTypes.SELECT, replacements: { active: true } }
 		)
 	]);
+	// SQLite returns stored dates as text, PostgreSQL as Date objects; both are UTC.
+	const day = (v: unknown) =>
+		v instanceof Date ? v.toISOString().slice(0, 10) : String(v).slice(0, 10);
+	const waiting: Waiting[] = waitingRows.map((w) => ({
+		journeyworkerId: String(w.journeyworkerId),
+		journeyworker: String(w.journeyworker),
+		entries: Number(w.entries),
+		oldestSubmitted: day(w.oldestSubmitted),
+		oldestWorkDate: day(w.oldestWorkDate)
+	}));
 	const atRisk = rows
 		.filter((r) => r.progress.risk.atRisk)
 		.map((r) => ({
@@ -196,8 +207,14 @@ export function html(d: Digest, name: string): string {
 	].join('\n');
 }
 
-/** Sends this week's digest to every active coordinator; returns how many were sent. */
-export async function sendCoordinatorDigests(now = new Date()): Promise<number> {
+/**
+ * Sends this week's digest to every active coordinator, whether or not it went out already;
+ * returns how many were sent. `onSent` runs after each message.
+ */
+export async function sendCoordinatorDigests(
+	now = new Date(),
+	onSent?: () => void
+): Promise<number> {
 	const today = now.toISOString().slice(0, 10);
 	const [digest, coordinators] = await Promise.all([
 		gather(today),
@@ -214,6 +231,59 @@ export async function sendCoordinatorDigests(now = new Date()): Promise<number> 
 			text: text(digest, c.name),
 			html: html(digest, c.name)
 		});
+		onSent?.();
 	}
 	return coordinators.length;
+}
+
+/** The Monday (server local time) of the week `now` falls in, as YYYY-MM-DD. */
+export function weekOf(now = new Date()): string {
+	const monday = new Date(
+		now.getFullYear(),
+		now.getMonth(),
+		now.getDate() - ((now.getDay() + 6) % 7)
+	);
+	const pad = (n: number) => String(n).padStart(2, '0');
+	return `${monday.getFullYear()}-${pad(monday.getMonth() + 1)}-${pad(monday.getDate())}`;
+}
+
+/**
+ * Sends this week's digest unless it already went out this week: the week's row in
+ * `coordinator_digests` is claimed first, so of several instances (or scheduler runs) only the
+ * first sends. Returns how many were sent, or null when the week was already claimed. A claim
+ * whose sending failed before any message went out is released, so a later run retries.
+ */
+export async function sendWeeklyDigest(now = new Date()): Promise<number | null> {
+	const week = weekOf(now);
+	// ON CONFLICT DO NOTHING rather than a caught error: PostgreSQL aborts a transaction on errors.
+	// The leading comment keeps Sequelize's SQLite driver from dropping the RETURNING row.
+	const claimed = await write((transaction) =>
+		sequelize.query<{ week: string }>(
+			`/* claim */ INSERT INTO coordinator_digests (week, claimed_at) VALUES (:week, :now)
+			 ON CONFLICT (week) DO NOTHING RETURNING week`,
+			{ replacements: { week, now }, type: QueryTypes.SELECT, transaction }
+		)
+	);
+	if (claimed.length === 0) return null;
+	let sent = 0;
+	try {
+		sent = await sendCoordinatorDigests(now, () => sent++);
+	} catch (err) {
+		if (sent === 0) {
+			await write((transaction) =>
+				sequelize.query('DELETE FROM coordinator_digests WHERE week = :week', {
+					replacements: { week },
+					transaction
+				})
+			);
+		}
+		throw err;
+	}
+	await write((transaction) =>
+		sequelize.query('UPDATE coordinator_digests SET recipients = :sent WHERE week = :week', {
+			replacements: { sent, week },
+			transaction
+		})
+	);
+	return sent;
 }

@@ -5,7 +5,7 @@ import * as certificates from '$lib/server/certificates';
 import { verifyLimiter } from '$lib/server/certificates/limit';
 
 export const load = (async ({ params, getClientAddress, setHeaders }) => {
-	const wait = verifyLimiter.take(getClientAddress());
+	const wait = await verifyLimiter.take(getClientAddress());
 	if (wait) error(429, `Too many lookups from this address. Try again in ${wait} seconds.`);
 	setHeaders({ 'cache-control': 'no-store' });
 	const typed = params.serial.slice(0, SERIAL_MAX_INPUT);

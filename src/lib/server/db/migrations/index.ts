@@ -7,6 +7,7 @@ import * as assessment from './2026-12-02-05-assessment';
 import * as signOffPhotos from './2026-12-02-06-sign-off-photos';
 import * as programmeRules from './2026-12-02-07-programme-rules';
 import * as certificates from './2026-12-02-08-certificates';
+import * as sharedState from './2026-12-02-09-shared-state';
 
 type Step = (params: { context: QueryInterface }) => Promise<void>;
 
@@ -19,5 +20,6 @@ export const migrations: { name: string; up: Step; down: Step }[] = [
 	{ name: '2026-12-02-05-assessment', ...assessment },
 	{ name: '2026-12-02-06-sign-off-photos', ...signOffPhotos },
 	{ name: '2026-12-02-07-programme-rules', ...programmeRules },
-	{ name: '2026-12-02-08-certificates', ...certificates }
+	{ name: '2026-12-02-08-certificates', ...certificates },
+	{ name: '2026-12-02-09-shared-state', ...sharedState }
 ];

@@ -8,7 +8,7 @@ const NO_STORE = { 'cache-control': 'no-store', 'access-control-allow-origin': '
 
 /** Public check of one serial: status, holder, programme, dates, scope and the signature. */
 export const GET = (async ({ params, getClientAddress }) => {
-	const wait = verifyLimiter.take(getClientAddress());
+	const wait = await verifyLimiter.take(getClientAddress());
 	if (wait) {
 		return json(
 			{ message: `Too many lookups from this address. Try again in ${wait} s.` },
