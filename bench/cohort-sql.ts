@@ -70,13 +70,13 @@ instruction AS (
    GROUP BY apprentice_id
 )
 SELECT u.id,
-       COALESCE(h.verified_tenths, 0) - COALESCE(r.tenths, 0) AS verifiedTenths,
-       COALESCE(h.pending_tenths, 0) AS pendingTenths,
+       COALESCE(h.verified_tenths, 0) - COALESCE(r.tenths, 0) AS "verifiedTenths",
+       COALESCE(h.pending_tenths, 0) AS "pendingTenths",
        COALESCE(h.returned, 0) AS returned,
        COALESCE(t.tier1, 0) AS tier1,
        COALESCE(t.tier2, 0) AS tier2,
        COALESCE(t.tier3, 0) AS tier3,
-       COALESCE(i.tenths, 0) AS rtiTenths
+       COALESCE(i.tenths, 0) AS "rtiTenths"
   FROM apprentice_profiles p
   JOIN users u ON u.id = p.user_id AND u.active = 1
   LEFT JOIN hours h ON h.apprentice_id = u.id

@@ -190,7 +190,7 @@ async function cohortBench(server: RunningServer, raw: RawDb, cookie: string, da
 	const limits = new Map(
 		(
 			await raw.all<{ id: string; returnedLimit: number }>(
-				`SELECT p.user_id AS id, pr.returned_limit AS returnedLimit
+				`SELECT p.user_id AS id, pr.returned_limit AS "returnedLimit"
 				   FROM apprentice_profiles p JOIN cohorts c ON c.id = p.cohort_id
 				   JOIN programmes pr ON pr.id = c.programme_id`
 			)
@@ -380,9 +380,9 @@ async function serverBenches(dataFile: string, scratch: string) {
 			firstDay: string;
 			supervisorId: string;
 		}>(
-			`SELECT u.id, u.email, u.name, p.start_date AS startDate,
-			        (SELECT MIN(work_date) FROM log_entries e WHERE e.apprentice_id = u.id) AS firstDay,
-			        (SELECT MIN(supervisor_id) FROM supervisions s WHERE s.apprentice_id = u.id) AS supervisorId
+			`SELECT u.id, u.email, u.name, p.start_date AS "startDate",
+			        (SELECT MIN(work_date) FROM log_entries e WHERE e.apprentice_id = u.id) AS "firstDay",
+			        (SELECT MIN(supervisor_id) FROM supervisions s WHERE s.apprentice_id = u.id) AS "supervisorId"
 			   FROM apprentice_profiles p JOIN users u ON u.id = p.user_id AND u.active = 1
 			  WHERE p.cohort_id = (SELECT MIN(cohort_id) FROM apprentice_profiles)
 			  ORDER BY u.email LIMIT ?`,

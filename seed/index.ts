@@ -37,7 +37,7 @@ try {
 	console.log(`Demo data ${result}. Sign in with any of these (password "${DEMO_PASSWORD}"):`);
 	for (const a of DEMO_ACCOUNTS) console.log(`  ${a.role.padEnd(12)} ${a.email}`);
 } catch (err) {
-	console.error((err as Error).message);
+	console.error((err as Error).message, (err as { errors?: unknown }).errors ?? '');
 	process.exitCode = 1;
 } finally {
 	await sequelize.close();

@@ -27,6 +27,7 @@ import {
 	type DrawnQuestion,
 	type StepResult
 } from '../src/lib/server/db';
+import { syncIdSequences } from '../src/lib/server/db/connection';
 import { DEMO_ACCOUNTS } from './demo';
 import type { WorkLogTask } from './worklog';
 
@@ -645,18 +646,18 @@ export async function loadSignOffTasks(): Promise<{
 	if (!framework) return null;
 	const [tasks, steps, questions] = await Promise.all([
 		select<Omit<SignOffTask, 'steps' | 'questions'>>(
-			`SELECT t.id, t.code, t.title, a.code AS area, t.tier, t.required_level AS requiredLevel,
-			        t.min_hours AS minHours
+			`SELECT t.id, t.code, t.title, a.code AS area, t.tier, t.required_level AS "requiredLevel",
+			        t.min_hours AS "minHours"
 			   FROM framework_tasks t JOIN framework_areas a ON a.id = t.area_id
 			  WHERE t.framework_id = ${framework.id}`
 		),
 		select<{ taskId: number; id: number; safety: number }>(
-			`SELECT s.task_id AS taskId, s.id, s.safety FROM task_steps s
+			`SELECT s.task_id AS "taskId", s.id, s.safety FROM task_steps s
 			   JOIN framework_tasks t ON t.id = s.task_id
 			  WHERE t.framework_id = ${framework.id} ORDER BY s.task_id, s.position`
 		),
-		select<{ taskId: number; id: number; options: string }>(
-			`SELECT q.task_id AS taskId, q.id, q.options FROM task_questions q
+		select<{ taskId: number; id: number; options: string | BankQuestion['options'] }>(
+			`SELECT q.task_id AS "taskId", q.id, q.options FROM task_questions q
 			   JOIN framework_tasks t ON t.id = q.task_id
 			  WHERE t.framework_id = ${framework.id} ORDER BY q.task_id, q.position`
 		)
@@ -668,7 +669,13 @@ export async function loadSignOffTasks(): Promise<{
 			steps: steps.filter((s) => s.taskId === t.id).map((s) => ({ id: s.id, safety: !!s.safety })),
 			questions: questions
 				.filter((q) => q.taskId === t.id)
-				.map((q) => ({ id: q.id, options: JSON.parse(q.options) as BankQuestion['options'] }))
+				.map((q) => ({
+					id: q.id,
+					// A JSON column: text from SQLite, already parsed by PostgreSQL.
+					options: (typeof q.options === 'string'
+						? JSON.parse(q.options)
+						: q.options) as BankQuestion['options']
+				}))
 		}))
 	};
 }
@@ -679,16 +686,16 @@ export async function loadSignOffInput(today: Date): Promise<SignOffInput | null
 	if (!current) return null;
 	const [apprentices, supervisions, work, coordinators] = await Promise.all([
 		select<{ id: string; email: string; startDate: string }>(
-			`SELECT u.id, u.email, p.start_date AS startDate
+			`SELECT u.id, u.email, p.start_date AS "startDate"
 			   FROM apprentice_profiles p JOIN users u ON u.id = p.user_id`
 		),
 		select<{ apprenticeId: string; id: string; email: string }>(
-			`SELECT v.apprentice_id AS apprenticeId, u.id, u.email
+			`SELECT v.apprentice_id AS "apprenticeId", u.id, u.email
 			   FROM supervisions v JOIN users u ON u.id = v.supervisor_id`
 		),
 		select<{ apprenticeId: string; taskId: number; tenths: number; reviewedAt: string }>(
-			`SELECT e.apprentice_id AS apprenticeId, lt.task_id AS taskId, lt.tenths,
-			        e.reviewed_at AS reviewedAt
+			`SELECT e.apprentice_id AS "apprenticeId", lt.task_id AS "taskId", lt.tenths,
+			        e.reviewed_at AS "reviewedAt"
 			   FROM log_entry_tasks lt JOIN log_entries e ON e.id = lt.entry_id
 			  WHERE e.status = 'verified' AND e.reviewed_at IS NOT NULL`
 		),
@@ -742,6 +749,7 @@ export async function seedSignOffs(today = new Date()): Promise<SignOffCounts | 
 		await store(data.responses, (b) => QuizResponse.bulkCreate(b, { transaction }));
 		await store(data.signOffs, (b) => SignOff.bulkCreate(b, { transaction }));
 		await store(data.audit, (b) => AuditEvent.bulkCreate(b, { transaction }));
+		await syncIdSequences(sequelize, transaction);
 		return {
 			attempts: data.attempts.length,
 			signOffs: data.signOffs.length,

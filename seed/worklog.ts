@@ -7,6 +7,7 @@
  */
 import { QueryTypes } from 'sequelize';
 import { LogEntry, LogEntryTask, RtiRecord, sequelize, write } from '../src/lib/server/db';
+import { syncIdSequences } from '../src/lib/server/db/connection';
 import type { EntryStatus, RtiResult } from '../src/lib/server/db';
 import { checkDigit } from '../src/lib/vin';
 import { DEMO_ACCOUNTS } from './demo';
@@ -951,13 +952,13 @@ export async function loadWorkLogInput(today: Date): Promise<WorkLogInput> {
 		sequelize.query<T>(sql, { type: QueryTypes.SELECT });
 	const [apprentices, supervisions, tasks, coordinators] = await Promise.all([
 		select<{ id: string; email: string; siteCode: string | null; startDate: string }>(
-			`SELECT u.id, u.email, s.code AS siteCode, p.start_date AS startDate
+			`SELECT u.id, u.email, s.code AS "siteCode", p.start_date AS "startDate"
 			   FROM apprentice_profiles p
 			   JOIN users u ON u.id = p.user_id
 			   LEFT JOIN sites s ON s.id = u.site_id`
 		),
 		select<{ apprenticeId: string; id: string; email: string }>(
-			`SELECT v.apprentice_id AS apprenticeId, u.id, u.email
+			`SELECT v.apprentice_id AS "apprenticeId", u.id, u.email
 			   FROM supervisions v JOIN users u ON u.id = v.supervisor_id`
 		),
 		select<WorkLogTask>(
@@ -1003,7 +1004,7 @@ export async function seedWorkLog(today = new Date()): Promise<WorkLogCounts | '
 	const log = generateWorkLog(await loadWorkLogInput(today));
 	return write(async (transaction) => {
 		const [{ maxId }] = await sequelize.query<{ maxId: number | null }>(
-			'SELECT MAX(id) AS maxId FROM log_entries',
+			'SELECT MAX(id) AS "maxId" FROM log_entries',
 			{ type: QueryTypes.SELECT, transaction }
 		);
 		// Ids are given here so the task rows can point at their entries without a read-back.
@@ -1015,6 +1016,7 @@ export async function seedWorkLog(today = new Date()): Promise<WorkLogCounts | '
 		for (const batch of chunks(entryRows)) await LogEntry.bulkCreate(batch, { transaction });
 		for (const batch of chunks(taskRows)) await LogEntryTask.bulkCreate(batch, { transaction });
 		for (const batch of chunks(log.rti)) await RtiRecord.bulkCreate(batch, { transaction });
+		await syncIdSequences(sequelize, transaction);
 		return { entries: entryRows.length, tasks: taskRows.length, rti: log.rti.length };
 	});
 }

@@ -2,11 +2,23 @@ import { error, type Handle, type HandleServerError, type ServerInit } from '@sv
 import { sequence } from '@sveltejs/kit/hooks';
 import { lucia } from '$lib/server/auth';
 import { ring } from '$lib/server/certificates/keys';
-import { prepare } from '$lib/server/db';
+import { dev } from '$app/environment';
+import { checkDatabase, prepare } from '$lib/server/db';
+import { checkStorage } from '$lib/server/storage';
 import * as framework from '$lib/server/framework';
 import { startDailyJobs } from '$lib/server/schedule';
 
 export const init: ServerInit = async () => {
+	try {
+		// Both stores answer before anything is migrated, created or written.
+		await checkDatabase();
+		await checkStorage();
+	} catch (err) {
+		console.error(`Journeymark cannot start: ${(err as Error).message}`);
+		// A served build stops with a non-zero code; the dev server shows the error instead.
+		if (!dev) process.exit(1);
+		throw err;
+	}
 	await prepare();
 	await framework.ensureDefault();
 	// Issuer keys exist before the first certificate or key-set request, not on it.

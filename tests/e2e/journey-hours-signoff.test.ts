@@ -61,8 +61,8 @@ beforeAll(async () => {
 		minTenths: number;
 		requiredLevel: number;
 	}>(
-		`SELECT t.id, t.code, CAST(ROUND(t.min_hours * 10) AS INTEGER) AS minTenths,
-		        t.required_level AS requiredLevel
+		`SELECT t.id, t.code, CAST(ROUND(t.min_hours * 10) AS INTEGER) AS "minTenths",
+		        t.required_level AS "requiredLevel"
 		   FROM framework_tasks t
 		  WHERE t.framework_id = (SELECT id FROM frameworks WHERE status = 'published' ORDER BY id DESC LIMIT 1)
 		    AND EXISTS (SELECT 1 FROM task_questions q WHERE q.task_id = t.id)
@@ -350,7 +350,7 @@ for (const size of SIZES) {
 				verifiedTenths: number;
 				passed: number;
 			}>(
-				`SELECT s.level, s.content_hash AS contentHash, s.results, s.verified_tenths AS verifiedTenths,
+				`SELECT s.level, s.content_hash AS "contentHash", s.results, s.verified_tenths AS "verifiedTenths",
 				        a.passed
 				   FROM sign_offs s JOIN quiz_attempts a ON a.id = s.quiz_attempt_id
 				  WHERE s.apprentice_id = ? AND s.task_id = ? AND s.kind = 'sign-off'`,

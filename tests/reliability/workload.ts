@@ -82,7 +82,7 @@ export class Plan {
 	async load(db: Db): Promise<void> {
 		const yesterday = new Date(Date.now() - 86_400_000).toISOString().slice(0, 10);
 		const people = await db.all<Person & { startDate: string }>(
-			`SELECT u.id, u.email, u.site_id AS siteId, p.start_date AS startDate
+			`SELECT u.id, u.email, u.site_id AS "siteId", p.start_date AS "startDate"
 			 FROM users u JOIN apprentice_profiles p ON p.user_id = u.id
 			 WHERE u.role = 'apprentice' AND u.active = 1 ORDER BY u.email`
 		);
@@ -133,7 +133,7 @@ export class Plan {
 		}
 		// One journeyworker per shop verifies, so no two reviewers race for the same entry.
 		const reviewers = await db.all<Person>(
-			`SELECT id, email, site_id AS siteId FROM users
+			`SELECT id, email, site_id AS "siteId" FROM users
 			 WHERE role = 'supervisor' AND active = 1 ORDER BY email`
 		);
 		for (const r of reviewers)

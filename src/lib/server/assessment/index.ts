@@ -375,8 +375,12 @@ export async function revoke(
 
 /** The level each task stands at: the highest sign-off or correction nothing later replaced. */
 export async function currentLevels(apprenticeId: string, transaction?: Transaction) {
-	const rows = await sequelize.query<{ code: string; level: 1 | 2 | 3 | 4; signedAt: string }>(
-		`SELECT t.code, MAX(s.level) AS level, MAX(s.signed_at) AS signedAt
+	const rows = await sequelize.query<{
+		code: string;
+		level: 1 | 2 | 3 | 4;
+		signedAt: string | Date;
+	}>(
+		`SELECT t.code, MAX(s.level) AS level, MAX(s.signed_at) AS "signedAt"
 		   FROM sign_offs s JOIN framework_tasks t ON t.id = s.task_id
 		  WHERE s.apprentice_id = :apprenticeId AND ${STANDING}
 		  GROUP BY t.code`,
@@ -442,17 +446,17 @@ export async function matrix(apprenticeId: string): Promise<MatrixCell[]> {
 		     JOIN log_entries e ON e.id = lt.entry_id AND e.apprentice_id = :apprenticeId AND ${COUNTED}
 		     JOIN framework_tasks t ON t.id = lt.task_id GROUP BY t.code),
 		 levels AS (
-		   SELECT t.code, MAX(s.level) AS level, MAX(s.signed_at) AS lastAssessed FROM sign_offs s
+		   SELECT t.code, MAX(s.level) AS level, MAX(s.signed_at) AS "lastAssessed" FROM sign_offs s
 		     JOIN framework_tasks t ON t.id = s.task_id
 		    WHERE s.apprentice_id = :apprenticeId AND ${STANDING}
 		    GROUP BY t.code),
 		 quiz AS (
-		   SELECT t.code, MAX(q.passed) AS passed FROM quiz_attempts q JOIN framework_tasks t ON t.id = q.task_id
+		   SELECT t.code, MAX(CASE WHEN q.passed THEN 1 ELSE 0 END) AS passed FROM quiz_attempts q JOIN framework_tasks t ON t.id = q.task_id
 		    WHERE q.apprentice_id = :apprenticeId AND q.submitted_at IS NOT NULL GROUP BY t.code)
-		 SELECT t.code, t.title, a.code AS areaCode, a.name AS areaName, t.tier,
-		        t.required_level AS requiredLevel, t.min_hours AS minHours,
-		        COALESCE(h.tenths, 0) AS verifiedTenths, l.level, l.lastAssessed,
-		        COALESCE(qz.passed, 0) AS quizPassed
+		 SELECT t.code, t.title, a.code AS "areaCode", a.name AS "areaName", t.tier,
+		        t.required_level AS "requiredLevel", t.min_hours AS "minHours",
+		        COALESCE(h.tenths, 0) AS "verifiedTenths", l.level, l."lastAssessed",
+		        COALESCE(qz.passed, 0) AS "quizPassed"
 		   FROM framework_tasks t JOIN framework_areas a ON a.id = t.area_id
 		   LEFT JOIN hours h ON h.code = t.code LEFT JOIN levels l ON l.code = t.code
 		   LEFT JOIN quiz qz ON qz.code = t.code
@@ -474,8 +478,8 @@ export async function history(apprenticeId: string, code: string) {
 		contentHash: string;
 		frameworkVersion: number;
 	}>(
-		`SELECT s.id, s.kind, s.level, u.name AS by, s.signed_at AS signedAt, s.reason,
-		        s.refers_to_id AS refersToId, s.content_hash AS contentHash, f.version AS frameworkVersion
+		`SELECT s.id, s.kind, s.level, u.name AS by, s.signed_at AS "signedAt", s.reason,
+		        s.refers_to_id AS "refersToId", s.content_hash AS "contentHash", f.version AS "frameworkVersion"
 		   FROM sign_offs s JOIN framework_tasks t ON t.id = s.task_id JOIN users u ON u.id = s.supervisor_id
 		   JOIN frameworks f ON f.id = s.framework_id
 		  WHERE s.apprentice_id = :apprenticeId AND t.code = :code ORDER BY s.id`,
@@ -493,7 +497,7 @@ export async function questionStatistics(code: string) {
 			attributes: ['id', 'prompt']
 		}),
 		sequelize.query<{ attemptId: number; questionId: number; correct: number }>(
-			`SELECT r.attempt_id AS attemptId, r.question_id AS questionId, r.correct
+			`SELECT r.attempt_id AS "attemptId", r.question_id AS "questionId", r.correct
 			   FROM quiz_responses r JOIN task_questions q ON q.id = r.question_id
 			   JOIN framework_tasks t ON t.id = q.task_id WHERE t.code = :code`,
 			{ type: QueryTypes.SELECT, replacements: { code } }

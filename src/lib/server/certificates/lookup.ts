@@ -5,9 +5,10 @@
  */
 import type { Database, Statement } from 'sqlite3';
 import { REASON_LABEL, type CertificateStatus, type RevocationReason } from '../../certificates';
+import { QueryTypes } from 'sequelize';
 import { sequelize } from '../db';
 import type { CertificateContent } from './content';
-import { ring } from './keys';
+import { publishedKey } from './keys';
 import { verifyContent } from './signing';
 
 interface Row {
@@ -15,8 +16,8 @@ interface Row {
 	content: string;
 	key_id: string;
 	signature: string;
-	expires_at: string | null;
-	revoked_at: string | null;
+	expires_at: string | Date | null;
+	revoked_at: string | Date | null;
 	revocation_reason: RevocationReason | null;
 }
 
@@ -61,6 +62,13 @@ manager.close = async () => {
 };
 
 async function readRow(serial: string): Promise<Row | undefined> {
+	if (sequelize.getDialect() !== 'sqlite') {
+		const rows = await sequelize.query<Row>(SQL, {
+			type: QueryTypes.SELECT,
+			replacements: [serial]
+		});
+		return rows[0];
+	}
 	const connection = await manager.getConnection({});
 	let statement = statements.get(connection);
 	if (!statement) {
@@ -91,13 +99,14 @@ function signatureHolds(row: Row, key: Parameters<typeof verifyContent>[0] | und
 	return valid;
 }
 
-const iso = (sqliteDate: string) => new Date(sqliteDate).toISOString();
+// SQLite gives the stored text, PostgreSQL a Date.
+const iso = (stored: string | Date) => new Date(stored).toISOString();
 
 /** The public view of a certificate, or null for a serial that was never issued. */
 export async function lookup(serial: string, now = new Date()): Promise<PublicView | null> {
-	const [row, keys] = await Promise.all([readRow(serial), ring()]);
+	const row = await readRow(serial);
 	if (!row) return null;
-	const signatureValid = signatureHolds(row, keys.published.get(row.key_id)?.key);
+	const signatureValid = signatureHolds(row, await publishedKey(row.key_id));
 	const content = JSON.parse(row.content) as CertificateContent;
 	// The stored columns decide revocation and expiry; the signed content decides everything shown.
 	const expiresAt = content.expiresAt;

@@ -1,7 +1,58 @@
-import { Sequelize, Transaction } from 'sequelize';
+import pg from 'pg';
+import { DataTypes, QueryTypes, Sequelize, Transaction } from 'sequelize';
 import type { Database as SqliteDatabase } from 'sqlite3';
+import type { Database } from '../config';
 
 export const BUSY_TIMEOUT_MS = 10_000;
+
+// PostgreSQL returns COUNT and SUM as bigint and AVG or `* 1.0` as numeric, both as strings;
+// SQLite returns numbers. Every count and sum here fits a double, so both dialects give numbers.
+pg.types.setTypeParser(pg.types.builtins.INT8, (value) => Number(value));
+(
+	DataTypes as unknown as { postgres: { DECIMAL: { parse(v: string): unknown } } }
+).postgres.DECIMAL.parse = (value) => Number(value);
+
+/** Opens the configured database: SQLite by default, PostgreSQL for a postgres:// address. */
+export function openDatabase(database: Database, logging = false, poolMax = 10): Sequelize {
+	if (database.dialect === 'sqlite') return openSequelize(database.path, logging);
+	const sequelize = new Sequelize(database.url, {
+		dialect: 'postgres',
+		logging: logging ? console.log : false,
+		define: { underscored: true },
+		pool: { max: poolMax, min: 0, idle: 10_000, acquire: 30_000 },
+		// A server that does not answer fails the start in seconds, not minutes.
+		dialectOptions: { connectionTimeoutMillis: 5_000, application_name: 'journeymark' }
+	});
+	textTimesInRawSelects(sequelize);
+	return sequelize;
+}
+
+/**
+ * Raw SELECTs on SQLite return stored times as text; PostgreSQL's driver makes Dates of them.
+ * So that raw rows look the same on both, times in raw SELECT results (not model reads) are
+ * given as ISO 8601 text here.
+ */
+function textTimesInRawSelects(sequelize: Sequelize) {
+	const query = sequelize.query.bind(sequelize) as (
+		sql: unknown,
+		options?: unknown
+	) => Promise<unknown>;
+	(sequelize as unknown as { query: typeof query }).query = async (sql, options) => {
+		const result = await query(sql, options);
+		const o = options as { type?: string; model?: unknown; instance?: unknown } | undefined;
+		if (o?.type === 'SELECT' && !o.model && !o.instance && Array.isArray(result)) {
+			for (const row of result) {
+				if (row && typeof row === 'object') {
+					for (const key of Object.keys(row)) {
+						const value = (row as Record<string, unknown>)[key];
+						if (value instanceof Date) (row as Record<string, unknown>)[key] = value.toISOString();
+					}
+				}
+			}
+		}
+		return result;
+	};
+}
 
 /**
  * Opens SQLite through Sequelize with the settings concurrent use needs: WAL, foreign keys,
@@ -32,9 +83,15 @@ export function openSequelize(storage: string, logging = false): Sequelize {
 	return sequelize;
 }
 
+/** The advisory lock every PostgreSQL write transaction holds: one number for the whole app. */
+export const WRITE_LOCK = 0x4a4d_0001;
+
 /**
  * Runs write transactions one after another. SQLite allows one writer at a time; queueing in
- * process keeps blocked BEGIN IMMEDIATE calls from filling libuv's thread pool.
+ * process keeps blocked BEGIN IMMEDIATE calls from filling libuv's thread pool. On PostgreSQL
+ * each transaction first takes one transaction-scoped advisory lock, so writes from every
+ * instance keep SQLite's one-at-a-time order: the audit chain's next link, serial numbers and
+ * "not twice in a row" checks read what the previous writer committed, whichever instance it was.
  */
 export class WriteQueue {
 	#tail: Promise<unknown> = Promise.resolve();
@@ -42,8 +99,40 @@ export class WriteQueue {
 	constructor(private readonly sequelize: Sequelize) {}
 
 	run<T>(work: (transaction: Transaction) => Promise<T>): Promise<T> {
-		const next = this.#tail.then(() => this.sequelize.transaction((t) => work(t)));
+		const postgres = this.sequelize.getDialect() === 'postgres';
+		const next = this.#tail.then(() =>
+			this.sequelize.transaction(async (t) => {
+				if (postgres) {
+					await this.sequelize.query(`SELECT pg_advisory_xact_lock(${WRITE_LOCK})`, {
+						transaction: t
+					});
+				}
+				return work(t);
+			})
+		);
 		this.#tail = next.catch(() => undefined);
 		return next;
+	}
+}
+
+/**
+ * After rows were stored with ids chosen by the caller (the demo's bulk loads), moves each
+ * PostgreSQL id sequence past the highest id, so the next ordinary insert gets a free one.
+ * SQLite picks the next id from the table itself and needs nothing.
+ */
+export async function syncIdSequences(sequelize: Sequelize, transaction?: Transaction) {
+	if (sequelize.getDialect() !== 'postgres') return;
+	const tables = await sequelize.query<{ table: string }>(
+		`SELECT table_name AS "table" FROM information_schema.columns
+		  WHERE table_schema = current_schema() AND column_name = 'id'
+		    AND column_default LIKE 'nextval(%'`,
+		{ type: QueryTypes.SELECT, transaction }
+	);
+	for (const { table } of tables) {
+		await sequelize.query(
+			`SELECT setval(pg_get_serial_sequence(:table, 'id'),
+			               COALESCE((SELECT MAX(id) FROM "${table.replace(/"/g, '')}"), 0) + 1, false)`,
+			{ replacements: { table: `"${table.replace(/"/g, '')}"` }, transaction }
+		);
 	}
 }

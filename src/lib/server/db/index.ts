@@ -1,21 +1,29 @@
 import { SequelizeStorage, Umzug } from 'umzug';
 import { config } from '../config';
-import { openSequelize, WriteQueue } from './connection';
+import { openDatabase, WriteQueue } from './connection';
 import { migrations } from './migrations';
 import { initModels } from './models';
 
 export * from './models';
 
 /** The one database of this process. */
-export const sequelize = openSequelize(config.databasePath, process.env.DB_LOG === '1');
+export const sequelize = openDatabase(
+	config.database,
+	process.env.DB_LOG === '1',
+	config.DATABASE_POOL_MAX
+);
 initModels(sequelize);
 
 /**
  * A second connection to the same file for the heaviest read-only aggregates. SQLite runs one
  * statement at a time per connection; in WAL mode a second reader works beside the first, so a
- * dashboard's queries share the machine's cores. Never write through it.
+ * dashboard's queries share the machine's cores. Never write through it. PostgreSQL's pool
+ * already runs queries side by side, so there it is the same pool.
  */
-export const reader = openSequelize(config.databasePath, process.env.DB_LOG === '1');
+export const reader =
+	config.database.dialect === 'sqlite'
+		? openDatabase(config.database, process.env.DB_LOG === '1')
+		: sequelize;
 
 const queue = new WriteQueue(sequelize);
 
@@ -33,14 +41,65 @@ export function migrator() {
 
 let ready: Promise<void> | undefined;
 
-/** Switches on WAL, applies pending migrations and refreshes planner statistics, once per process. */
+/** The database address with any password hidden, for messages. */
+export const databaseLabel =
+	config.database.dialect === 'sqlite'
+		? config.database.path
+		: config.database.url.replace(/\/\/([^:@/]*)(:[^@/]*)?@/, '//$1@');
+
+/**
+ * Checks the database answers (and refuses to go on with a clear message when not), switches
+ * SQLite to WAL, applies pending migrations and refreshes planner statistics, once per process.
+ * On PostgreSQL the migrations run under a session advisory lock, so instances starting
+ * together migrate once.
+ */
 export function prepare(): Promise<void> {
 	ready ??= (async () => {
-		await sequelize.query('PRAGMA journal_mode = WAL');
-		await migrator().up();
+		await checkDatabase();
+		if (sequelize.getDialect() === 'sqlite') {
+			await sequelize.query('PRAGMA journal_mode = WAL');
+			await migrator().up();
+		} else {
+			await migrateLocked();
+		}
 		await analyse();
 	})();
 	return ready;
+}
+
+/** Throws a clear message unless the database answers; reads only, so nothing is written. */
+export async function checkDatabase(): Promise<void> {
+	try {
+		await sequelize.authenticate();
+	} catch (err) {
+		throw new Error(
+			`The database at ${databaseLabel} could not be opened: ${(err as Error).message}`,
+			{
+				cause: err
+			}
+		);
+	}
+}
+
+const MIGRATION_LOCK = 0x4a4d_0002;
+
+async function migrateLocked() {
+	// Session-level locks belong to one connection: hold one for the whole run.
+	const manager = sequelize.connectionManager as unknown as {
+		getConnection(): Promise<{ query(sql: string): Promise<unknown> }>;
+		releaseConnection(connection: unknown): Promise<void>;
+	};
+	const connection = await manager.getConnection();
+	try {
+		await connection.query(`SELECT pg_advisory_lock(${MIGRATION_LOCK})`);
+		try {
+			await migrator().up();
+		} finally {
+			await connection.query(`SELECT pg_advisory_unlock(${MIGRATION_LOCK})`);
+		}
+	} finally {
+		await manager.releaseConnection(connection);
+	}
 }
 
 /**

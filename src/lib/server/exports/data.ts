@@ -66,11 +66,11 @@ async function signOffs(scope: { apprenticeId: string } | { cohortId: number }) 
 		'apprenticeId' in scope
 			? 's.apprentice_id = :apprenticeId'
 			: `s.apprentice_id IN (SELECT p.user_id FROM apprentice_profiles p JOIN users pu ON pu.id = p.user_id
-			                        WHERE p.cohort_id = :cohortId AND pu.active = 1)`;
+			                        WHERE p.cohort_id = :cohortId AND pu.active)`;
 	const rows = await sequelize.query<SignOffRow>(
-		`SELECT s.id, s.apprentice_id AS apprenticeId, s.kind, t.code AS taskCode, t.title AS taskTitle,
-		        s.level, u.name AS journeyworker, s.signed_at AS signedAt, f.version AS frameworkVersion,
-		        s.refers_to_id AS refersToId, s.reason, r.kind AS replacedKind, r.signed_at AS replacedAt
+		`SELECT s.id, s.apprentice_id AS "apprenticeId", s.kind, t.code AS "taskCode", t.title AS "taskTitle",
+		        s.level, u.name AS journeyworker, s.signed_at AS "signedAt", f.version AS "frameworkVersion",
+		        s.refers_to_id AS "refersToId", s.reason, r.kind AS "replacedKind", r.signed_at AS "replacedAt"
 		   FROM sign_offs s
 		   JOIN framework_tasks t ON t.id = s.task_id
 		   JOIN frameworks f ON f.id = s.framework_id

@@ -190,7 +190,7 @@ export interface FrameworkSummary {
 
 export async function list(): Promise<FrameworkSummary[]> {
 	return sequelize.query<FrameworkSummary>(
-		`SELECT f.id, f.name, f.version, f.status, f.published_at AS publishedAt, f.based_on_id AS basedOnId,
+		`SELECT f.id, f.name, f.version, f.status, f.published_at AS "publishedAt", f.based_on_id AS "basedOnId",
 		        (SELECT COUNT(*) FROM framework_areas a WHERE a.framework_id = f.id) AS areas,
 		        (SELECT COUNT(*) FROM framework_tasks t WHERE t.framework_id = f.id) AS tasks
 		   FROM frameworks f ORDER BY f.name, f.version DESC`,
@@ -326,8 +326,8 @@ export async function tasks(frameworkId: number, filter: TaskFilter) {
 	const clause = where.join(' AND ');
 	const [rows, [{ total }]] = await Promise.all([
 		sequelize.query<TaskRow>(
-			`SELECT t.id, t.code, t.title, a.code AS areaCode, a.name AS areaName, t.tier,
-			        t.required_level AS requiredLevel, t.min_hours AS minHours,
+			`SELECT t.id, t.code, t.title, a.code AS "areaCode", a.name AS "areaName", t.tier,
+			        t.required_level AS "requiredLevel", t.min_hours AS "minHours",
 			        (SELECT COUNT(*) FROM task_steps s WHERE s.task_id = t.id) AS steps,
 			        (SELECT COUNT(*) FROM task_questions q WHERE q.task_id = t.id) AS questions
 			   FROM framework_tasks t JOIN framework_areas a ON a.id = t.area_id

@@ -4,6 +4,7 @@
  * per apprentice.
  */
 import { reader } from '../db';
+import { dialectSql } from '../db/dialect';
 import { select, STANDING } from '../db/sql';
 import type { Programme } from '../db/models/Programme';
 import type { ApprenticeFacts, ProgrammeRules, RatioRule, Tier, TierCounts } from './engine';
@@ -71,12 +72,12 @@ export async function people(scope: Scope): Promise<Person[]> {
 	const where = scope.apprenticeId
 		? 'a.user_id = :apprenticeId'
 		: scope.cohortId != null
-			? 'a.cohort_id = :cohortId AND u.active = 1'
-			: 'u.active = 1';
+			? 'a.cohort_id = :cohortId AND u.active'
+			: 'u.active';
 	return select<Person>(
-		`SELECT u.id, u.name, u.email, u.site_id AS siteId, s.name AS siteName, c.id AS cohortId,
-		        c.name AS cohortName, c.programme_id AS programmeId, a.start_date AS startDate,
-		        a.planned_end_date AS plannedEndDate, a.prior_credit_hours AS priorCreditHours
+		`SELECT u.id, u.name, u.email, u.site_id AS "siteId", s.name AS "siteName", c.id AS "cohortId",
+		        c.name AS "cohortName", c.programme_id AS "programmeId", a.start_date AS "startDate",
+		        a.planned_end_date AS "plannedEndDate", a.prior_credit_hours AS "priorCreditHours"
 		   FROM apprentice_profiles a
 		   JOIN users u ON u.id = a.user_id
 		   JOIN cohorts c ON c.id = a.cohort_id
@@ -103,16 +104,16 @@ export async function tierTotals(frameworkId: number): Promise<Record<Tier, numb
  * time, and, over the verified entries of the forecast window only, the window's sums (see
  * `WindowSums` in the engine) with efficiency's standard and actual time for each half.
  */
-const WEEK = `CAST((julianday(e.work_date) - julianday(:windowStart)) / 7 AS INTEGER)`;
+const WEEK = dialectSql.wholeWeeks('e.work_date', ':windowStart');
 const IN_WINDOW = `e.work_date BETWEEN :windowStart AND :today`;
 const EARLY = `e.work_date <= :halfway`;
-const TOTALS = `SUM(e.tenths) AS tenths, COUNT(*) AS entries, MAX(e.work_date) AS lastDate`;
-const WINDOW_SUMS = `SUM(e.tenths) AS windowTenths,
-	SUM(e.tenths * ${WEEK} * (${WINDOW} - ${WEEK})) AS windowWeighted,
-	COALESCE(SUM(CASE WHEN ${EARLY} THEN e.standard_tenths END), 0) AS standardEarly,
-	COALESCE(SUM(CASE WHEN ${EARLY} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS actualEarly,
-	COALESCE(SUM(CASE WHEN NOT ${EARLY} THEN e.standard_tenths END), 0) AS standardLate,
-	COALESCE(SUM(CASE WHEN NOT ${EARLY} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS actualLate`;
+const TOTALS = `SUM(e.tenths) AS tenths, COUNT(*) AS entries, MAX(e.work_date) AS "lastDate"`;
+const WINDOW_SUMS = `SUM(e.tenths) AS "windowTenths",
+	SUM(e.tenths * ${WEEK} * (${WINDOW} - ${WEEK})) AS "windowWeighted",
+	COALESCE(SUM(CASE WHEN ${EARLY} THEN e.standard_tenths END), 0) AS "standardEarly",
+	COALESCE(SUM(CASE WHEN ${EARLY} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS "actualEarly",
+	COALESCE(SUM(CASE WHEN NOT ${EARLY} THEN e.standard_tenths END), 0) AS "standardLate",
+	COALESCE(SUM(CASE WHEN NOT ${EARLY} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS "actualLate"`;
 
 interface TotalRow {
 	id: string;
@@ -199,16 +200,16 @@ export async function fetchRaw(scope: Scope, frameworkId: number, today: string)
 		),
 		select<ReplacedRow>(
 			`SELECT e.apprentice_id AS id, e.status, ${TOTALS},
-			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} THEN e.tenths END), 0) AS windowTenths,
-			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} THEN e.tenths * ${WEEK} * (${WINDOW} - ${WEEK}) END), 0) AS windowWeighted,
-			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} AND ${EARLY} THEN e.standard_tenths END), 0) AS standardEarly,
-			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} AND ${EARLY} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS actualEarly,
-			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} AND NOT ${EARLY} THEN e.standard_tenths END), 0) AS standardLate,
-			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} AND NOT ${EARLY} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS actualLate
+			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} THEN e.tenths END), 0) AS "windowTenths",
+			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} THEN e.tenths * ${WEEK} * (${WINDOW} - ${WEEK}) END), 0) AS "windowWeighted",
+			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} AND ${EARLY} THEN e.standard_tenths END), 0) AS "standardEarly",
+			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} AND ${EARLY} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS "actualEarly",
+			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} AND NOT ${EARLY} THEN e.standard_tenths END), 0) AS "standardLate",
+			        COALESCE(SUM(CASE WHEN ${IN_WINDOW} AND NOT ${EARLY} AND e.standard_tenths IS NOT NULL THEN e.tenths END), 0) AS "actualLate"
 			   FROM log_entries c JOIN log_entries e ON e.id = c.corrects_id ${e.join}
 			  WHERE c.corrects_id IS NOT NULL AND c.status = 'verified' AND e.status = 'verified'
 			    AND ${e.sql}
-			  GROUP BY e.apprentice_id`,
+			  GROUP BY e.apprentice_id, e.status`,
 			replacements
 		),
 		select<MetRow>(
@@ -221,8 +222,8 @@ export async function fetchRaw(scope: Scope, frameworkId: number, today: string)
 			   SELECT p.apprentice_id, t0.code, MAX(p.level) AS level
 			     FROM per_task p JOIN framework_tasks t0 ON t0.id = p.task_id
 			    GROUP BY p.apprentice_id, t0.code)
-			 SELECT st.apprentice_id AS id, a.code AS areaCode, t.tier,
-			        SUM(st.level >= t.required_level) AS met, COUNT(*) AS signed, SUM(st.level) AS levels
+			 SELECT st.apprentice_id AS id, a.code AS "areaCode", t.tier,
+			        COUNT(CASE WHEN st.level >= t.required_level THEN 1 END) AS met, COUNT(*) AS signed, SUM(st.level) AS levels
 			   FROM standing st
 			   JOIN framework_tasks t ON t.framework_id = :frameworkId AND t.code = st.code
 			   JOIN framework_areas a ON a.id = t.area_id
@@ -232,7 +233,7 @@ export async function fetchRaw(scope: Scope, frameworkId: number, today: string)
 		),
 		select<RtiRow>(
 			`SELECT r.apprentice_id AS id,
-			        CAST((julianday(r.completed_on) - julianday(p.start_date)) / 365.25 AS INTEGER) AS year,
+			        ${dialectSql.wholeYears('r.completed_on', 'p.start_date')} AS year,
 			        SUM(r.tenths) AS tenths
 			   FROM rti_records r ${r.join}
 			   JOIN apprentice_profiles p ON p.user_id = r.apprentice_id
@@ -251,7 +252,7 @@ export async function fetchRaw(scope: Scope, frameworkId: number, today: string)
  */
 export function siteDays(since: string, today: string): Promise<SiteDayRow[]> {
 	return select<SiteDayRow>(
-		`SELECT u.site_id AS siteId, e.work_date AS day,
+		`SELECT u.site_id AS "siteId", e.work_date AS day,
 		        COUNT(DISTINCT e.apprentice_id) AS apprentices,
 		        COUNT(DISTINCT e.supervisor_id) AS journeyworkers
 		   FROM log_entries e JOIN users u ON u.id = e.apprentice_id

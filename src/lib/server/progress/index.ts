@@ -3,6 +3,7 @@
  * It fetches facts with `data.ts` and leaves every rule to the pure `engine.ts`.
  */
 import { Cohort, Programme } from '../db';
+import { dialectSql } from '../db/dialect';
 import { COUNTED, select } from '../db/sql';
 import * as framework from '../framework';
 import * as assessment from '../assessment';
@@ -266,18 +267,18 @@ export async function burnUp(cohortId: number | 'all', today = isoDate(new Date(
 	const scope = cohortId === 'all' ? '1 = 1' : 'a.cohort_id = :cohortId';
 	const [weeks, persons] = await Promise.all([
 		select<{ week: string; tenths: number }>(
-			`SELECT date(e.work_date, 'weekday 0', '-6 days') AS week, SUM(e.tenths) AS tenths
+			`SELECT ${dialectSql.weekStart('e.work_date')} AS week, SUM(e.tenths) AS tenths
 			   FROM log_entries e JOIN apprentice_profiles a ON a.user_id = e.apprentice_id
 			  WHERE ${scope} AND ${COUNTED}
 			  GROUP BY week ORDER BY week`,
 			{ cohortId }
 		),
 		select<{ startDate: string; plannedEndDate: string; credit: number; ojlHours: number }>(
-			`SELECT a.start_date AS startDate, a.planned_end_date AS plannedEndDate,
-			        a.prior_credit_hours AS credit, p.ojl_hours AS ojlHours
+			`SELECT a.start_date AS "startDate", a.planned_end_date AS "plannedEndDate",
+			        a.prior_credit_hours AS credit, p.ojl_hours AS "ojlHours"
 			   FROM apprentice_profiles a JOIN cohorts c ON c.id = a.cohort_id
 			   JOIN programmes p ON p.id = c.programme_id JOIN users u ON u.id = a.user_id
-			  WHERE ${scope} AND u.active = 1`,
+			  WHERE ${scope} AND u.active`,
 			{ cohortId }
 		)
 	]);

@@ -1,5 +1,6 @@
 import { QueryTypes, UniqueConstraintError } from 'sequelize';
 import { sequelize, write } from '../db';
+import { dialectSql } from '../db/dialect';
 import * as mail from '../mail';
 
 interface Waiting {
@@ -18,14 +19,14 @@ interface Waiting {
 export async function sendReviewDigests(now = new Date()): Promise<number> {
 	const day = now.toISOString().slice(0, 10);
 	const rows = await sequelize.query<Waiting>(
-		`SELECT v.supervisor_id AS supervisorId, s.email, s.name, COUNT(e.id) AS waiting,
-		        MIN(e.work_date) AS oldest, GROUP_CONCAT(DISTINCT a.name) AS apprentices
+		`SELECT v.supervisor_id AS "supervisorId", s.email, s.name, COUNT(e.id) AS waiting,
+		        MIN(e.work_date) AS oldest, ${dialectSql.joinedDistinct('a.name')} AS apprentices
 		   FROM supervisions v
-		   JOIN users s ON s.id = v.supervisor_id AND s.active = 1
+		   JOIN users s ON s.id = v.supervisor_id AND s.active
 		   JOIN log_entries e ON e.apprentice_id = v.apprentice_id AND e.status = 'submitted'
 		   JOIN users a ON a.id = e.apprentice_id
 		  WHERE NOT EXISTS (SELECT 1 FROM review_digests d WHERE d.supervisor_id = v.supervisor_id AND d.day = :day)
-		  GROUP BY v.supervisor_id`,
+		  GROUP BY v.supervisor_id, s.email, s.name`,
 		{ type: QueryTypes.SELECT, replacements: { day } }
 	);
 	let sent = 0;

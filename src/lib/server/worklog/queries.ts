@@ -1,4 +1,5 @@
 import type { EntryStatus } from '../db';
+import { dialectSql } from '../db/dialect';
 import { select } from '../db/sql';
 
 export interface EntrySummary {
@@ -22,16 +23,16 @@ export interface EntrySummary {
 }
 
 const SUMMARY = `
-	SELECT e.id, e.work_date AS workDate, e.start_time AS startTime, e.end_time AS endTime, e.tenths,
-	       e.repair_order AS repairOrder,
+	SELECT e.id, e.work_date AS "workDate", e.start_time AS "startTime", e.end_time AS "endTime", e.tenths,
+	       e.repair_order AS "repairOrder",
 	       TRIM(COALESCE(e.vehicle_year || ' ', '') || e.vehicle_make || ' ' || e.vehicle_model) AS vehicle,
-	       e.status, e.return_comment AS returnComment, e.apprentice_id AS apprenticeId,
-	       a.name AS apprenticeName, s.name AS supervisorName,
-	       (SELECT GROUP_CONCAT(t.code, ' ') FROM log_entry_tasks lt JOIN framework_tasks t ON t.id = lt.task_id
-	         WHERE lt.entry_id = e.id) AS taskCodes,
-	       (SELECT COUNT(*) FROM evidence v WHERE v.entry_id = e.id) AS evidenceCount,
-	       (SELECT MIN(v.id) FROM evidence v WHERE v.entry_id = e.id AND v.kind = 'image') AS thumbnailId,
-	       e.corrects_id AS correctsId, e.submitted_at AS submittedAt
+	       e.status, e.return_comment AS "returnComment", e.apprentice_id AS "apprenticeId",
+	       a.name AS "apprenticeName", s.name AS "supervisorName",
+	       (SELECT ${dialectSql.joined('t.code', ' ')} FROM log_entry_tasks lt JOIN framework_tasks t ON t.id = lt.task_id
+	         WHERE lt.entry_id = e.id) AS "taskCodes",
+	       (SELECT COUNT(*) FROM evidence v WHERE v.entry_id = e.id) AS "evidenceCount",
+	       (SELECT MIN(v.id) FROM evidence v WHERE v.entry_id = e.id AND v.kind = 'image') AS "thumbnailId",
+	       e.corrects_id AS "correctsId", e.submitted_at AS "submittedAt"
 	  FROM log_entries e
 	  JOIN users a ON a.id = e.apprentice_id
 	  JOIN users s ON s.id = e.supervisor_id`;
@@ -106,15 +107,20 @@ export async function suggestions(apprenticeId: string) {
 			odometer: number | null;
 			odometerUnit: 'mi' | 'km';
 		}>(
-			`SELECT vehicle_year AS vehicleYear, vehicle_make AS vehicleMake, vehicle_model AS vehicleModel,
-			        vin, MAX(odometer) AS odometer, odometer_unit AS odometerUnit
-			   FROM log_entries WHERE apprentice_id = :apprenticeId AND (vin IS NOT NULL OR vehicle_make <> '')
-			  GROUP BY COALESCE(vin, vehicle_make || vehicle_model)
-			  ORDER BY MAX(work_date) DESC LIMIT 6`,
+			// Per vehicle, the latest entry's details with the highest odometer seen.
+			`SELECT "vehicleYear", "vehicleMake", "vehicleModel", vin, odometer, "odometerUnit"
+			   FROM (SELECT vehicle_year AS "vehicleYear", vehicle_make AS "vehicleMake",
+			                vehicle_model AS "vehicleModel", vin, odometer_unit AS "odometerUnit",
+			                MAX(odometer) OVER vehicle AS odometer, MAX(work_date) OVER vehicle AS latest,
+			                ROW_NUMBER() OVER (vehicle ORDER BY work_date DESC, id DESC) AS nth
+			           FROM log_entries
+			          WHERE apprentice_id = :apprenticeId AND (vin IS NOT NULL OR vehicle_make <> '')
+			         WINDOW vehicle AS (PARTITION BY COALESCE(vin, vehicle_make || vehicle_model))) v
+			  WHERE nth = 1 ORDER BY latest DESC LIMIT 6`,
 			{ apprenticeId }
 		),
 		select<{ repairOrder: string }>(
-			`SELECT repair_order AS repairOrder FROM log_entries WHERE apprentice_id = :apprenticeId
+			`SELECT repair_order AS "repairOrder" FROM log_entries WHERE apprentice_id = :apprenticeId
 			  GROUP BY repair_order ORDER BY MAX(work_date) DESC LIMIT 6`,
 			{ apprenticeId }
 		),
@@ -129,7 +135,7 @@ export async function suggestions(apprenticeId: string) {
 		),
 		select<{ id: string; name: string }>(
 			`SELECT u.id, u.name FROM supervisions v JOIN users u ON u.id = v.supervisor_id
-			  WHERE v.apprentice_id = :apprenticeId AND u.active = 1 ORDER BY u.name`,
+			  WHERE v.apprentice_id = :apprenticeId AND u.active ORDER BY u.name`,
 			{ apprenticeId }
 		)
 	]);

@@ -65,8 +65,8 @@ export interface RtiRow {
 /** Records of one apprentice, or every record waiting for confirmation when `apprenticeId` is null. */
 export async function list(apprenticeId: string | null): Promise<RtiRow[]> {
 	return sequelize.query<RtiRow>(
-		`SELECT r.id, r.apprentice_id AS apprenticeId, u.name AS apprenticeName, r.course, r.provider,
-		        r.completed_on AS completedOn, r.tenths, r.result, r.confirmed_at IS NOT NULL AS confirmed
+		`SELECT r.id, r.apprentice_id AS "apprenticeId", u.name AS "apprenticeName", r.course, r.provider,
+		        r.completed_on AS "completedOn", r.tenths, r.result, r.confirmed_at IS NOT NULL AS confirmed
 		   FROM rti_records r JOIN users u ON u.id = r.apprentice_id
 		  WHERE ${apprenticeId ? 'r.apprentice_id = :apprenticeId' : 'r.confirmed_at IS NULL'}
 		  ORDER BY r.completed_on DESC LIMIT 500`,

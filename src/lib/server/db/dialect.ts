@@ -1,0 +1,51 @@
+/**
+ * The only SQL that differs between SQLite and PostgreSQL: date arithmetic and joined lists.
+ * Every other query is written once in SQL both accept (quoted camelCase aliases, booleans
+ * tested as booleans, counts with CASE rather than sums of comparisons, full GROUP BY lists).
+ */
+import { config } from '../config';
+
+export type Dialect = 'sqlite' | 'postgres';
+
+export function sqlFor(dialect: Dialect) {
+	const pg = dialect === 'postgres';
+	/** Days from `earlier` to `later` (dates or ISO date strings); a number, may be fractional on SQLite. */
+	const days = (later: string, earlier: string) =>
+		pg
+			? `(CAST(${later} AS date) - CAST(${earlier} AS date))`
+			: `(julianday(${later}) - julianday(${earlier}))`;
+	return {
+		dialect,
+		/** Whole weeks from `earlier` to `later`, truncated toward zero. */
+		wholeWeeks: (later: string, earlier: string) =>
+			pg ? `(${days(later, earlier)} / 7)` : `CAST(${days(later, earlier)} / 7 AS INTEGER)`,
+		/** Whole years of 365.25 days from `earlier` to `later`, truncated toward zero. */
+		wholeYears: (later: string, earlier: string) =>
+			pg
+				? `CAST(TRUNC(${days(later, earlier)} / 365.25) AS INTEGER)`
+				: `CAST(${days(later, earlier)} / 365.25 AS INTEGER)`,
+		/** The Monday of the week a date falls in, as 'YYYY-MM-DD'. */
+		weekStart: (date: string) =>
+			pg
+				? `to_char(date_trunc('week', CAST(${date} AS date)), 'YYYY-MM-DD')`
+				: `date(${date}, 'weekday 0', '-6 days')`,
+		/** The values of a group joined by `separator` (order not guaranteed). */
+		joined: (expr: string, separator: string) =>
+			pg
+				? `string_agg(CAST(${expr} AS text), '${separator}')`
+				: `GROUP_CONCAT(${expr}, '${separator}')`,
+		/** The distinct values of a group joined by commas (order not guaranteed). */
+		joinedDistinct: (expr: string) =>
+			pg ? `string_agg(DISTINCT CAST(${expr} AS text), ',')` : `GROUP_CONCAT(DISTINCT ${expr})`,
+		/** Days from `earlier` to `later` (dates or ISO date strings), as above. */
+		days,
+		/** The day of the week of a date as an integer, 0 for Sunday to 6 for Saturday. */
+		dayOfWeek: (date: string) =>
+			pg
+				? `CAST(EXTRACT(DOW FROM CAST(${date} AS date)) AS INTEGER)`
+				: `CAST(strftime('%w', ${date}) AS INTEGER)`
+	};
+}
+
+/** The configured database's dialect. */
+export const dialectSql = sqlFor(config.database.dialect);
