@@ -21,6 +21,16 @@ export default defineConfig({
 				}
 			},
 			{
+				// Two built instances on PostgreSQL and the S3 stand-in: `npm run test:postgres`.
+				test: {
+					name: 'scale',
+					include: ['tests/scale/**/*.test.ts'],
+					environment: 'node',
+					testTimeout: 120_000,
+					hookTimeout: 240_000
+				}
+			},
+			{
 				test: {
 					name: 'e2e',
 					include: ['tests/e2e/**/*.test.ts'],
