@@ -110,7 +110,12 @@ export function defaultDestination(now = new Date()): string {
 
 const isMain =
 	process.argv[1] && path.resolve(process.argv[1]) === path.resolve(import.meta.filename);
-if (isMain) {
+if (isMain && /^postgres(ql)?:\/\//i.test(process.env.DATABASE_URL ?? '')) {
+	console.error(
+		"No backup taken: DATABASE_URL is PostgreSQL. Use the server's own tools (pg_dump, or continuous archiving); see the README."
+	);
+	process.exitCode = 2;
+} else if (isMain) {
 	const source = sqlitePath(process.env.DATABASE_URL || 'data/journeymark.db');
 	// npm runs scripts from the project root; a relative destination means where npm was called.
 	const dest = process.argv[2]

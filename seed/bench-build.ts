@@ -268,6 +268,10 @@ export async function buildBench(
 		perWeek: (a) => Math.max(1, scale.assessmentsPerWeek - 1 + (a.email.length % 3))
 	});
 
+	if (config.database.dialect !== 'sqlite')
+		throw new Error(
+			'The benchmark scenario is built into a SQLite file; set DATABASE_URL to a path.'
+		);
 	const db = new Loader(config.databasePath);
 	const counts: BenchCounts = {
 		sites: 0,
