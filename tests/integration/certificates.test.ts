@@ -3,9 +3,10 @@ import { createLocalJWKSet, decodeProtectedHeader, jwtVerify } from 'jose';
 import { gunzipSync } from 'node:zlib';
 import { beforeAll, describe, expect, it, vi } from 'vitest';
 
-// Keys and rendered PDFs go beside this file's temporary database, before any server module loads.
+// Keys and rendered PDFs go in this file's temporary folder (beside its mail folder; DATABASE_URL
+// may be a PostgreSQL address), before any server module loads.
 vi.hoisted(() => {
-	const dir = process.env.DATABASE_URL!.replace(/[^/\\]+$/, '');
+	const dir = process.env.FAKE_MAIL_DIR!.replace(/[^/\\]+$/, '');
 	process.env.KEYS_DIR = `${dir}keys`;
 	process.env.CERTIFICATES_DIR = `${dir}pdf`;
 });

@@ -1,10 +1,13 @@
-import { Op, QueryTypes } from 'sequelize';
+import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { LoginThrottle, prepare, sequelize, Site, write } from '$lib/server/db';
-import { BUSY_TIMEOUT_MS } from '$lib/server/db/connection';
+import { config } from '$lib/server/config';
+import { BUSY_TIMEOUT_MS, openDatabase, WRITE_LOCK, WriteQueue } from '$lib/server/db/connection';
 import { migrations } from '$lib/server/db/migrations';
 
 beforeAll(() => prepare());
+
+const onPostgres = sequelize.getDialect() === 'postgres';
 
 const pragma = async (name: string) => {
 	const [row] = await sequelize.query<Record<string, unknown>>(`PRAGMA ${name}`, {
@@ -14,11 +17,71 @@ const pragma = async (name: string) => {
 };
 
 describe('database', () => {
-	it('runs in WAL mode with foreign keys and a busy timeout', async () => {
+	it.skipIf(onPostgres)('runs in WAL mode with foreign keys and a busy timeout', async () => {
 		expect(await pragma('journal_mode')).toBe('wal');
 		expect(await pragma('foreign_keys')).toBe(1);
 		expect(await pragma('busy_timeout')).toBe(BUSY_TIMEOUT_MS);
 	});
+
+	it.skipIf(!onPostgres)(
+		'holds the write lock in every write, so writers of two instances never interleave',
+		async () => {
+			// A second instance: its own pool and its own in-process queue.
+			const other = openDatabase(config.database, false, 2);
+			try {
+				await write(async (transaction) => {
+					const [held] = await sequelize.query<{ n: number }>(
+						`SELECT COUNT(*) AS n FROM pg_locks WHERE locktype = 'advisory' AND granted
+						    AND pid = pg_backend_pid() AND classid = 0 AND objid = :lock`,
+						{ type: QueryTypes.SELECT, replacements: { lock: WRITE_LOCK }, transaction }
+					);
+					expect(held.n).toBe(1);
+					const [taken] = await other.query<{ got: boolean }>(
+						'SELECT pg_try_advisory_xact_lock(:lock) AS got',
+						{ type: QueryTypes.SELECT, replacements: { lock: WRITE_LOCK } }
+					);
+					expect(taken.got).toBe(false);
+				});
+
+				const key = 'test:two-instances';
+				await sequelize.query(
+					`INSERT INTO login_throttles (key, failures, window_start) VALUES (:key, 0, :now)`,
+					{ replacements: { key, now: new Date() } }
+				);
+				let inside = 0;
+				let most = 0;
+				const bump = (db: typeof sequelize) => async (transaction: Transaction) => {
+					most = Math.max(most, ++inside);
+					const [row] = await db.query<{ failures: number }>(
+						'SELECT failures FROM login_throttles WHERE key = :key',
+						{ type: QueryTypes.SELECT, replacements: { key }, transaction }
+					);
+					// A pause between read and write, so an interleaved writer would lose an update.
+					await new Promise((resolve) => setTimeout(resolve, 2));
+					await db.query('UPDATE login_throttles SET failures = :n WHERE key = :key', {
+						replacements: { key, n: row.failures + 1 },
+						transaction
+					});
+					inside--;
+				};
+				const otherQueue = new WriteQueue(other);
+				const results = await Promise.allSettled(
+					Array.from({ length: 60 }, (_, i) =>
+						i % 2 ? otherQueue.run(bump(other)) : write(bump(sequelize))
+					)
+				);
+				expect(results.filter((r) => r.status === 'rejected')).toEqual([]);
+				expect(most).toBe(1);
+				const [row] = await sequelize.query<{ failures: number }>(
+					'SELECT failures FROM login_throttles WHERE key = :key',
+					{ type: QueryTypes.SELECT, replacements: { key } }
+				);
+				expect(row.failures).toBe(60);
+			} finally {
+				await other.close();
+			}
+		}
+	);
 
 	it('applies migrations once and records them', async () => {
 		await prepare();
@@ -31,9 +94,11 @@ describe('database', () => {
 		await expect(
 			sequelize.query(
 				`INSERT INTO cohorts (name, programme_id, start_date, planned_end_date, created_at, updated_at)
-				 VALUES ('x', 999, '2026-01-01', '2027-01-01', datetime(), datetime())`
+				 VALUES ('x', 999, '2026-01-01', '2027-01-01', :now, :now)`,
+				{ replacements: { now: new Date() } }
 			)
-		).rejects.toThrow(/FOREIGN KEY/);
+			// SQLite says "FOREIGN KEY constraint failed", PostgreSQL "violates foreign key constraint".
+		).rejects.toThrow(/FOREIGN KEY|foreign key constraint/);
 	});
 
 	it('keeps all of 200 concurrent read-then-write transactions', async () => {

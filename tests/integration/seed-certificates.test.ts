@@ -1,7 +1,8 @@
 import { beforeAll, describe, expect, it, vi } from 'vitest';
 
 vi.hoisted(() => {
-	const dir = process.env.DATABASE_URL!.replace(/[^/\\]+$/, '');
+	// This file's temporary folder (its mail folder's parent); DATABASE_URL may be a URL.
+	const dir = process.env.FAKE_MAIL_DIR!.replace(/[^/\\]+$/, '');
 	process.env.KEYS_DIR = `${dir}keys`;
 	process.env.CERTIFICATES_DIR = `${dir}pdf`;
 });

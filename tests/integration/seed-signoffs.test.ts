@@ -67,54 +67,59 @@ describe('demo sign-offs', () => {
 		const rows = await select<{
 			id: number;
 			level: 1 | 2 | 3 | 4;
-			results: string;
+			results: string | Record<string, StepResult>;
 			verifiedTenths: number;
 			signedAt: string;
 			requiredLevel: 1 | 2 | 3 | 4;
 			minHours: number;
 			taskId: number;
 			hoursThen: number | null;
-			quizOk: number;
-			assigned: number;
-			qualified: number;
-			self: number;
+			// Booleans: 0 or 1 from SQLite, true or false from PostgreSQL.
+			quizOk: number | boolean;
+			assigned: number | boolean;
+			qualified: number | boolean;
+			self: number | boolean;
 			sessionHash: string;
 		}>(
-			`SELECT s.id, s.level, s.results, s.verified_tenths AS verifiedTenths, s.signed_at AS signedAt,
-			        t.required_level AS requiredLevel, t.min_hours AS minHours, t.id AS taskId,
+			`SELECT s.id, s.level, s.results, s.verified_tenths AS "verifiedTenths", s.signed_at AS "signedAt",
+			        t.required_level AS "requiredLevel", t.min_hours AS "minHours", t.id AS "taskId",
 			        (SELECT SUM(lt.tenths) FROM log_entry_tasks lt JOIN log_entries e ON e.id = lt.entry_id
 			          WHERE e.apprentice_id = s.apprentice_id AND lt.task_id = s.task_id
-			            AND e.status = 'verified' AND e.reviewed_at <= s.signed_at) AS hoursThen,
+			            AND e.status = 'verified' AND e.reviewed_at <= s.signed_at) AS "hoursThen",
 			        EXISTS (SELECT 1 FROM quiz_attempts q WHERE q.id = s.quiz_attempt_id AND q.passed
 			                 AND q.apprentice_id = s.apprentice_id AND q.task_id = s.task_id
-			                 AND q.submitted_at < s.signed_at) AS quizOk,
+			                 AND q.submitted_at < s.signed_at) AS "quizOk",
 			        EXISTS (SELECT 1 FROM supervisions v WHERE v.apprentice_id = s.apprentice_id
 			                 AND v.supervisor_id = s.supervisor_id) AS assigned,
 			        EXISTS (SELECT 1 FROM supervisor_profiles p WHERE p.user_id = s.supervisor_id) AS qualified,
-			        s.supervisor_id = s.apprentice_id AS self, s.session_hash AS sessionHash
+			        s.supervisor_id = s.apprentice_id AS self, s.session_hash AS "sessionHash"
 			   FROM sign_offs s JOIN framework_tasks t ON t.id = s.task_id
 			  WHERE s.kind = 'sign-off'`
 		);
-		const steps = await select<{ taskId: number; id: number; safety: number }>(
-			'SELECT task_id AS taskId, id, safety FROM task_steps ORDER BY task_id, position'
+		const steps = await select<{ taskId: number; id: number; safety: number | boolean }>(
+			'SELECT task_id AS "taskId", id, safety FROM task_steps ORDER BY task_id, position'
 		);
 		for (const row of rows) {
 			expect(row.verifiedTenths, `sign-off ${row.id}`).toBe(row.hoursThen);
-			expect(row.signedAt <= '2026-12-02 15:00:00.000 +00:00').toBe(true);
+			expect(new Date(row.signedAt).getTime()).toBeLessThanOrEqual(TODAY.getTime());
 			expect(row.sessionHash).toBe(SEED_SESSION_HASH);
 			const problems = signOffProblems({
 				level: row.level,
 				requiredLevel: row.requiredLevel,
 				minHours: row.minHours,
 				verifiedTenths: row.verifiedTenths,
-				quizPassed: row.quizOk === 1,
+				quizPassed: !!row.quizOk,
 				checklist: steps
 					.filter((s) => s.taskId === row.taskId)
-					.map((s) => ({ stepId: s.id, safety: s.safety === 1 })),
-				results: JSON.parse(row.results) as Record<string, StepResult>,
-				supervisorAssigned: row.assigned === 1,
-				supervisorQualified: row.qualified === 1,
-				selfSignOff: row.self === 1
+					.map((s) => ({ stepId: s.id, safety: !!s.safety })),
+				// A JSON column: text from SQLite, already parsed by PostgreSQL.
+				results:
+					typeof row.results === 'string'
+						? (JSON.parse(row.results) as Record<string, StepResult>)
+						: row.results,
+				supervisorAssigned: !!row.assigned,
+				supervisorQualified: !!row.qualified,
+				selfSignOff: !!row.self
 			});
 			expect(problems, `sign-off ${row.id}`).toEqual({});
 		}
@@ -163,7 +168,7 @@ describe('demo sign-offs', () => {
 			reason: string;
 			audited: number;
 		}>(
-			`SELECT s.kind, u.role, o.kind AS refersKind, o.level AS refersLevel, s.level, s.reason,
+			`SELECT s.kind, u.role, o.kind AS "refersKind", o.level AS "refersLevel", s.level, s.reason,
 			        (SELECT COUNT(*) FROM audit_events a WHERE a.subject = 'sign-off:' || o.id
 			            AND a.kind = CASE s.kind WHEN 'revocation' THEN 'sign-off.revoked' ELSE 'sign-off.corrected' END) AS audited
 			   FROM sign_offs s JOIN sign_offs o ON o.id = s.refers_to_id JOIN users u ON u.id = s.supervisor_id
@@ -192,7 +197,8 @@ describe('demo sign-offs', () => {
 	it('tells the story: Bea completes shop safety and another area, Nia behind, Gus stalled', async () => {
 		const areas = await select<{ area: string; tasks: number; done: number }>(
 			`${LEVELS}
-			 SELECT a.code AS area, COUNT(*) AS tasks, SUM(COALESCE(l.level, 0) >= t.required_level) AS done
+			 SELECT a.code AS area, COUNT(*) AS tasks,
+			        COUNT(CASE WHEN COALESCE(l.level, 0) >= t.required_level THEN 1 END) AS done
 			   FROM framework_tasks t JOIN framework_areas a ON a.id = t.area_id
 			   LEFT JOIN levels l ON l.task_id = t.id AND l.apprentice_id = (SELECT id FROM users WHERE email = :bea)
 			  GROUP BY a.code`,

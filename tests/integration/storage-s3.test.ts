@@ -9,7 +9,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { FAKE_S3_KEYS, startFakeS3 } from '../../fakes/s3';
 
 // Settings are read once at import: start the fake and set them before any server module loads.
-const dir = process.env.DATABASE_URL!.replace(/[^/\\]+$/, '');
+// This file's temporary folder (its mail folder's parent); DATABASE_URL may be a URL.
+const dir = process.env.FAKE_MAIL_DIR!.replace(/[^/\\]+$/, '');
 const BUCKET = 'journeymark-app';
 const fake = await startFakeS3({ port: 0, dir: path.join(dir, 's3'), buckets: [BUCKET] });
 Object.assign(process.env, {
