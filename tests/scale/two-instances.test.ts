@@ -326,12 +326,21 @@ describe.skipIf(!SERVER)('two instances on one PostgreSQL database and one bucke
 
 	it('refuses to start on a database it cannot reach, writing nothing', async () => {
 		const keys = path.join(dir, 'refused-keys');
-		const wrong = new URL(database.url);
-		wrong.password = 'not-the-password';
-		for (const url of [wrong.toString(), 'postgres://journeymark@127.0.0.1:1/journeymark']) {
-			const { code, output } = await expectRefusal({ ...env, DATABASE_URL: url, KEYS_DIR: keys });
-			expect(code).toBe(1);
-			expect(output).toMatch(/Journeymark cannot start: The database at postgres:\/\/journeymark@/);
+		// A database that is not there (refused whatever the server's sign-in method), and a port
+		// nothing listens on; the password in the address is never repeated.
+		const missing = new URL(database.url);
+		missing.password = 'not-the-password';
+		missing.pathname = '/jm_no_such_database';
+		const nowhere = new URL(missing);
+		nowhere.port = '1';
+		for (const url of [missing, nowhere]) {
+			const { code, output } = await expectRefusal({
+				...env,
+				DATABASE_URL: url.toString(),
+				KEYS_DIR: keys
+			});
+			expect(code, output).toBe(1);
+			expect(output).toMatch(/Journeymark cannot start: The database at postgres:\/\/[^:@/]+@/);
 			expect(output).not.toContain('not-the-password');
 		}
 		expect(existsSync(keys)).toBe(false);
