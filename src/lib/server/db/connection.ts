@@ -2,6 +2,7 @@ import pg from 'pg';
 import { DataTypes, QueryTypes, Sequelize, Transaction } from 'sequelize';
 import type { Database as SqliteDatabase } from 'sqlite3';
 import type { Database } from '../config';
+import { STATEMENTS } from './dialect';
 
 export const BUSY_TIMEOUT_MS = 10_000;
 
@@ -103,7 +104,7 @@ export class WriteQueue {
 		const next = this.#tail.then(() =>
 			this.sequelize.transaction(async (t) => {
 				if (postgres) {
-					await this.sequelize.query(`SELECT pg_advisory_xact_lock(${WRITE_LOCK})`, {
+					await this.sequelize.query(STATEMENTS.transactionLock(WRITE_LOCK), {
 						transaction: t
 					});
 				}
@@ -122,17 +123,11 @@ export class WriteQueue {
  */
 export async function syncIdSequences(sequelize: Sequelize, transaction?: Transaction) {
 	if (sequelize.getDialect() !== 'postgres') return;
-	const tables = await sequelize.query<{ table: string }>(
-		`SELECT table_name AS "table" FROM information_schema.columns
-		  WHERE table_schema = current_schema() AND column_name = 'id'
-		    AND column_default LIKE 'nextval(%'`,
-		{ type: QueryTypes.SELECT, transaction }
-	);
+	const tables = await sequelize.query<{ table: string }>(STATEMENTS.sequencedTables, {
+		type: QueryTypes.SELECT,
+		transaction
+	});
 	for (const { table } of tables) {
-		await sequelize.query(
-			`SELECT setval(pg_get_serial_sequence(:table, 'id'),
-			               COALESCE((SELECT MAX(id) FROM "${table.replace(/"/g, '')}"), 0) + 1, false)`,
-			{ replacements: { table: `"${table.replace(/"/g, '')}"` }, transaction }
-		);
+		await sequelize.query(STATEMENTS.advanceSequence(table), { transaction });
 	}
 }

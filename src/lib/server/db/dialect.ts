@@ -1,7 +1,9 @@
 /**
- * The only SQL that differs between SQLite and PostgreSQL: date arithmetic and joined lists.
- * Every other query is written once in SQL both accept (quoted camelCase aliases, booleans
- * tested as booleans, counts with CASE rather than sums of comparisons, full GROUP BY lists).
+ * The only SQL that differs between SQLite and PostgreSQL: date arithmetic and joined lists in
+ * queries (`sqlFor`), and the few statements one database has and the other lacks
+ * (`STATEMENTS`). Every other query is written once in SQL both accept (quoted camelCase
+ * aliases, booleans tested as booleans, counts with CASE rather than sums of comparisons, full
+ * GROUP BY lists, INSERT … ON CONFLICT).
  */
 import { config } from '../config';
 
@@ -49,3 +51,24 @@ export function sqlFor(dialect: Dialect) {
 
 /** The configured database's dialect. */
 export const dialectSql = sqlFor(config.database.dialect);
+
+/** Statements for one database only; callers check the dialect first. */
+export const STATEMENTS = {
+	/** SQLite: readers keep reading while one writer writes. */
+	walMode: 'PRAGMA journal_mode = WAL',
+	/** PostgreSQL: held until the transaction ends; makes writers take turns across instances. */
+	transactionLock: (key: number) => `SELECT pg_advisory_xact_lock(${Math.trunc(key)})`,
+	/** PostgreSQL: held by one connection until released (the migration run). */
+	sessionLock: (key: number) => `SELECT pg_advisory_lock(${Math.trunc(key)})`,
+	sessionUnlock: (key: number) => `SELECT pg_advisory_unlock(${Math.trunc(key)})`,
+	/** PostgreSQL: tables whose `id` comes from a sequence. */
+	sequencedTables: `SELECT table_name AS "table" FROM information_schema.columns
+	  WHERE table_schema = current_schema() AND column_name = 'id'
+	    AND column_default LIKE 'nextval(%'`,
+	/** PostgreSQL: the next id `table` hands out is one past its highest. */
+	advanceSequence: (table: string) => {
+		const quoted = `"${table.replace(/"/g, '')}"`;
+		return `SELECT setval(pg_get_serial_sequence('${quoted}', 'id'),
+		                      COALESCE((SELECT MAX(id) FROM ${quoted}), 0) + 1, false)`;
+	}
+} as const;

@@ -1,6 +1,7 @@
 import { SequelizeStorage, Umzug } from 'umzug';
 import { config } from '../config';
 import { openDatabase, WriteQueue } from './connection';
+import { STATEMENTS } from './dialect';
 import { migrations } from './migrations';
 import { initModels } from './models';
 
@@ -57,7 +58,7 @@ export function prepare(): Promise<void> {
 	ready ??= (async () => {
 		await checkDatabase();
 		if (sequelize.getDialect() === 'sqlite') {
-			await sequelize.query('PRAGMA journal_mode = WAL');
+			await sequelize.query(STATEMENTS.walMode);
 			await migrator().up();
 		} else {
 			await migrateLocked();
@@ -91,11 +92,11 @@ async function migrateLocked() {
 	};
 	const connection = await manager.getConnection();
 	try {
-		await connection.query(`SELECT pg_advisory_lock(${MIGRATION_LOCK})`);
+		await connection.query(STATEMENTS.sessionLock(MIGRATION_LOCK));
 		try {
 			await migrator().up();
 		} finally {
-			await connection.query(`SELECT pg_advisory_unlock(${MIGRATION_LOCK})`);
+			await connection.query(STATEMENTS.sessionUnlock(MIGRATION_LOCK));
 		}
 	} finally {
 		await manager.releaseConnection(connection);

@@ -36,6 +36,9 @@ export function s3Client(
 	if (!!options.accessKeyId !== !!options.secretAccessKey) {
 		throw new Error('S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY must be set together.');
 	}
+	// The SDK's version is pinned in package.json and supports Node 20; its notice that later
+	// versions will not would otherwise repeat at every start.
+	process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
 	return new S3Client({
 		region: options.region || 'us-east-1',
 		endpoint: options.endpoint || undefined,
