@@ -1,6 +1,6 @@
 /**
  * The built app (`node <BUILD_DIR>`) on a free 127.0.0.1 port for the benchmarks, with its own
- * database copy and temporary folders, and the small HTTP helpers the runner needs.
+ * database copy (SQLite file or PostgreSQL database) and temporary folders, and the small HTTP helpers the runner needs.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { existsSync, mkdirSync } from 'node:fs';
@@ -25,13 +25,14 @@ export interface RunningServer {
 }
 
 /**
- * Starts the build in `buildDir` against `databaseFile`, with mail, keys, uploads and the
- * certificate cache under `scratch`. Resolves once `/api/ping` answers.
+ * Starts the build in `buildDir` against `database` (its DATABASE_URL: a SQLite file or a
+ * postgres:// address), with mail, keys, uploads and the certificate cache under `scratch`.
+ * Resolves once `/api/ping` answers.
  */
 export async function startServer(
 	root: string,
 	buildDir: string,
-	databaseFile: string,
+	database: string,
 	scratch: string
 ): Promise<RunningServer> {
 	const entry = path.resolve(root, buildDir, 'index.js');
@@ -54,7 +55,7 @@ export async function startServer(
 			HOST: '127.0.0.1',
 			PORT: String(port),
 			ORIGIN: base,
-			DATABASE_URL: databaseFile,
+			DATABASE_URL: database,
 			DAILY_JOBS: 'off',
 			FAKE_MAIL_DIR: path.join(scratch, 'mail'),
 			// Nothing the benchmarks call sends mail; a closed port makes any attempt fail fast.
