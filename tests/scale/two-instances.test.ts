@@ -3,7 +3,8 @@
  * ports, one PostgreSQL database, one S3-compatible bucket (the local stand-in in fakes/) and one
  * shared keys folder, as behind a reverse proxy. A session made on one works on the other and
  * ends on both; an entry and its photo written through one are read through the other; a
- * certificate issued on one verifies on the other; verify lookups are counted across both.
+ * certificate issued on one verifies on the other; verify lookups are counted across both; the
+ * weekly digest run by two hosts at once goes out once.
  * Then the refusals: an unreachable database or a missing bucket stops the server at start,
  * with a clear message, before anything is written.
  *
@@ -11,7 +12,7 @@
  * `npm run test:postgres` runs it, and `bash .ci/run` starts PostgreSQL for it.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
-import { existsSync, mkdtempSync, readdirSync } from 'node:fs';
+import { existsSync, mkdtempSync, readdirSync, readFileSync } from 'node:fs';
 import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
@@ -322,6 +323,42 @@ describe.skipIf(!SERVER)('two instances on one PostgreSQL database and one bucke
 		// Counted per process, alternating requests would get twice the allowance through.
 		expect(refused).toBe(true);
 		expect(answered).toBeLessThanOrEqual(LOOKUPS_PER_MINUTE);
+	});
+
+	it('sends the weekly digest once when two hosts run the scheduled job together', async () => {
+		const weekly = () =>
+			readdirSync(path.join(dir, 'mail'))
+				.map(
+					(f) => JSON.parse(readFileSync(path.join(dir, 'mail', f), 'utf8')) as { subject: string }
+				)
+				.filter((m) => /^Week of \d{4}-\d{2}-\d{2}: /.test(m.subject)).length;
+		const before = weekly();
+		const job = () =>
+			new Promise<{ code: number | null; output: string }>((resolve) => {
+				const child = spawn(process.execPath, ['--import', 'tsx', 'seed/digest.ts', '--once'], {
+					env,
+					stdio: ['ignore', 'pipe', 'pipe']
+				});
+				let output = '';
+				child.stdout!.on('data', (d) => (output += d));
+				child.stderr!.on('data', (d) => (output += d));
+				child.on('exit', (code) => resolve({ code, output }));
+			});
+		const runs = await Promise.all([job(), job()]);
+		for (const run of runs) expect(run.code, run.output).toBe(0);
+		const said = runs.map((r) => r.output).join('');
+		expect(said).toMatch(/Weekly digest sent to \d+ coordinator/);
+		expect(said).toMatch(/already sent/);
+		const {
+			rows: [{ n }]
+		} = await sql.query<{ n: number }>(
+			`SELECT COUNT(*)::int AS n FROM users WHERE role = 'coordinator' AND active`
+		);
+		// Delivery to the fake server may trail the job's exit by a moment.
+		const deadline = Date.now() + 5_000;
+		while (weekly() - before < n && Date.now() < deadline)
+			await new Promise((r) => setTimeout(r, 100));
+		expect(weekly() - before).toBe(n);
 	});
 
 	it('refuses to start on a database it cannot reach, writing nothing', async () => {
