@@ -79,13 +79,16 @@ export function databaseOf(url: string): Database {
 	return { dialect: 'sqlite', path: sqlitePath(url) };
 }
 
+/** A database or service address fit for messages: any password in it is left out. */
+export const withoutPassword = (url: string) => url.replace(/\/\/([^:@/]*)(:[^@/]*)?@/, '//$1@');
+
 /** Accepts a plain path, `file:path` or `sqlite:path`; `:memory:` passes through. */
 export function sqlitePath(url: string): string {
 	const bare = url.replace(/^(sqlite|file):(\/\/)?/, '');
 	if (bare === ':memory:') return bare;
 	if (/^[a-z]+:\/\//i.test(url) && !/^(sqlite|file):/.test(url)) {
 		throw new Error(
-			`DATABASE_URL "${url.replace(/\/\/[^@/]*@/, '//…@')}" is neither a SQLite path nor a postgres:// address.`
+			`DATABASE_URL "${withoutPassword(url)}" is neither a SQLite path nor a postgres:// address.`
 		);
 	}
 	return path.resolve(bare);

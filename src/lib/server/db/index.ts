@@ -1,5 +1,5 @@
 import { SequelizeStorage, Umzug } from 'umzug';
-import { config } from '../config';
+import { config, withoutPassword } from '../config';
 import { openDatabase, WriteQueue } from './connection';
 import { STATEMENTS } from './dialect';
 import { migrations } from './migrations';
@@ -46,7 +46,7 @@ let ready: Promise<void> | undefined;
 export const databaseLabel =
 	config.database.dialect === 'sqlite'
 		? config.database.path
-		: config.database.url.replace(/\/\/([^:@/]*)(:[^@/]*)?@/, '//$1@');
+		: withoutPassword(config.database.url);
 
 /**
  * Checks the database answers (and refuses to go on with a clear message when not), switches
