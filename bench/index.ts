@@ -32,7 +32,9 @@ import { pdfGeneration, printPdf, printVerify, verifyThroughput } from './certif
 import type { PdfBench, VerifyBench } from './certificates';
 import { COHORT_SQL, compareTotals, RawDb, type ApiApprentice, type SqlTotals } from './cohort-sql';
 import { capacity, hoursPost, type PostBench, type PostingApprentice } from './hours-post';
-import { copyToPostgres, freshDatabase, migrate } from './postgres';
+import { freshPostgresDatabase } from '../seed/postgres';
+import { withoutPassword } from '../src/lib/server/config';
+import { copyToPostgres, migrate } from './postgres';
 import { signIn, startServer, timedGet, type RunningServer } from './server';
 
 const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -514,7 +516,7 @@ async function postgresBenches(dataFile: string, scratch: string) {
 		);
 		return;
 	}
-	const serverLabel = POSTGRES_SERVER.replace(/\/\/([^:@/]*)(:[^@/]*)?@/, '//$1@');
+	const serverLabel = withoutPassword(POSTGRES_SERVER);
 	const cohort = seen.cohort;
 	const viewer = seen.viewer;
 	const sqliteApi = (summary.cohortApi as { medianMs: number } | undefined)?.medianMs;
@@ -527,7 +529,7 @@ async function postgresBenches(dataFile: string, scratch: string) {
 	const source = path.join(scratch, 'postgres-source.db');
 	await copyData(dataFile, source);
 	await migrate(ROOT, source);
-	const database = await freshDatabase(POSTGRES_SERVER);
+	const database = await freshPostgresDatabase(POSTGRES_SERVER, 'jm_bench');
 	let server: RunningServer | undefined;
 	try {
 		const schemaStarted = Date.now();

@@ -3,45 +3,13 @@
  * the schema made by the app's own migrations, so the built server can be measured on it.
  */
 import { spawn } from 'node:child_process';
-import { randomBytes } from 'node:crypto';
 import pg from 'pg';
-import sqlite3 from 'sqlite3';
+import { withoutPassword } from '../src/lib/server/config';
+import { STATEMENTS } from '../src/lib/server/db/dialect';
+import { RawDb } from './cohort-sql';
 
 /** Rows read from SQLite and sent to PostgreSQL in one COPY, at most. */
 const BATCH_ROWS = 10_000;
-
-export interface PostgresCopy {
-	name: string;
-	url: string;
-	drop: () => Promise<void>;
-}
-
-/** Creates an empty database on the server `serverUrl` points at; `drop` removes it again. */
-export async function freshDatabase(serverUrl: string): Promise<PostgresCopy> {
-	const name = `jm_bench_${process.pid}_${randomBytes(4).toString('hex')}`;
-	const admin = new pg.Client({ connectionString: serverUrl });
-	await admin.connect();
-	try {
-		await admin.query(`CREATE DATABASE ${name}`);
-	} finally {
-		await admin.end();
-	}
-	const url = new URL(serverUrl);
-	url.pathname = `/${name}`;
-	return {
-		name,
-		url: url.toString(),
-		async drop() {
-			const again = new pg.Client({ connectionString: serverUrl });
-			await again.connect();
-			try {
-				await again.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
-			} finally {
-				await again.end();
-			}
-		}
-	};
-}
 
 /** Applies the app's migrations to `database` (a SQLite file or postgres:// address) in a child process, as the app reads its config on import. */
 export function migrate(root: string, database: string): Promise<void> {
@@ -58,23 +26,9 @@ export function migrate(root: string, database: string): Promise<void> {
 		child.on('exit', (code) =>
 			code === 0
 				? resolve()
-				: reject(new Error(`Migrating ${database.replace(/\/\/[^@/]*@/, '//…@')} failed:\n${out}`))
+				: reject(new Error(`Migrating ${withoutPassword(database)} failed:\n${out}`))
 		);
 	});
-}
-
-function openSqlite(file: string): Promise<sqlite3.Database> {
-	return new Promise((resolve, reject) => {
-		const db = new sqlite3.Database(file, sqlite3.OPEN_READONLY, (err) =>
-			err ? reject(err) : resolve(db)
-		);
-	});
-}
-
-function all<T>(db: sqlite3.Database, sql: string, params: unknown[] = []): Promise<T[]> {
-	return new Promise((resolve, reject) =>
-		db.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as T[])))
-	);
 }
 
 const COPY_ESCAPES: Record<string, string> = {
@@ -166,9 +120,7 @@ export interface CopyResult {
  */
 export async function copyToPostgres(sqliteFile: string, url: string): Promise<CopyResult> {
 	const started = performance.now();
-	// dialect.ts reads the app's config on import: load it only when a copy is made.
-	const { STATEMENTS } = await import('../src/lib/server/db/dialect');
-	const source = await openSqlite(sqliteFile);
+	const source = new RawDb(sqliteFile);
 	const target = new pg.Client({ connectionString: url });
 	await target.connect();
 	let rows = 0;
@@ -191,8 +143,7 @@ export async function copyToPostgres(sqliteFile: string, url: string): Promise<C
 		);
 		const sqliteTables = new Set(
 			(
-				await all<{ name: string }>(
-					source,
+				await source.all<{ name: string }>(
 					`SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%'`
 				)
 			).map((r) => r.name)
@@ -210,7 +161,7 @@ export async function copyToPostgres(sqliteFile: string, url: string): Promise<C
 
 		await target.query('BEGIN');
 		for (const table of foreignKeyOrder(pgTables, refs)) {
-			const names = (await all<{ name: string }>(source, `PRAGMA table_info(${quote(table)})`)).map(
+			const names = (await source.all<{ name: string }>(`PRAGMA table_info(${quote(table)})`)).map(
 				(c) => c.name
 			);
 			const types = new Map(
@@ -225,7 +176,7 @@ export async function copyToPostgres(sqliteFile: string, url: string): Promise<C
 			const select = `SELECT rowid AS "__rowid", ${names.map(quote).join(', ')} FROM ${quote(table)}
 			                 WHERE rowid > ? ORDER BY rowid LIMIT ${BATCH_ROWS}`;
 			const copy = `COPY ${quote(table)} (${names.map(quote).join(', ')}) FROM STDIN`;
-			const read = (after: number) => all<Record<string, unknown>>(source, select, [after]);
+			const read = (after: number) => source.all<Record<string, unknown>>(select, [after]);
 			let next = read(Number.MIN_SAFE_INTEGER);
 			for (;;) {
 				const chunk = await next;
@@ -250,7 +201,7 @@ export async function copyToPostgres(sqliteFile: string, url: string): Promise<C
 		throw err;
 	} finally {
 		await target.end();
-		await new Promise<void>((resolve) => source.close(() => resolve()));
+		await source.close();
 	}
 	return { tables, rows, seconds: Math.round((performance.now() - started) / 100) / 10 };
 }

@@ -3,7 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterAll } from 'vitest';
 import { startFakeSmtp } from '../../fakes/smtp';
-import { freshPostgresDatabase } from '../helpers/postgres';
+import { freshPostgresDatabase } from '../../seed/postgres';
 
 // Each test file gets its own database and mail folder, set before any server module loads:
 // a SQLite file by default, or a new PostgreSQL database when TEST_POSTGRES_URL names a server.
