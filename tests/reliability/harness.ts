@@ -14,7 +14,7 @@ import { startFakeSmtp } from '../../fakes/smtp';
 
 export const ROOT = path.resolve(import.meta.dirname, '../..');
 
-const freePort = () =>
+export const freePort = () =>
 	new Promise<number>((resolve) => {
 		const server = net.createServer().listen(0, '127.0.0.1', () => {
 			const { port } = server.address() as net.AddressInfo;
@@ -24,18 +24,26 @@ const freePort = () =>
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
-/** Runs a command to its end; resolves with its exit code and output. */
+/**
+ * Runs a command to its end; resolves with its exit code and output. With `timeoutMs`, a
+ * command still running then is killed (code null).
+ */
 export function run(
 	command: string,
 	args: string[],
-	env: NodeJS.ProcessEnv
+	env: NodeJS.ProcessEnv,
+	timeoutMs?: number
 ): Promise<{ code: number | null; out: string }> {
 	return new Promise((resolve) => {
 		const child = spawn(command, args, { cwd: ROOT, env, stdio: ['ignore', 'pipe', 'pipe'] });
 		let out = '';
 		child.stdout.on('data', (d) => (out += d));
 		child.stderr.on('data', (d) => (out += d));
-		child.on('exit', (code) => resolve({ code, out: out.trim() }));
+		const timer = timeoutMs ? setTimeout(() => child.kill('SIGKILL'), timeoutMs) : undefined;
+		child.on('exit', (code) => {
+			clearTimeout(timer);
+			resolve({ code, out: out.trim() });
+		});
 	});
 }
 

@@ -13,7 +13,6 @@
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { existsSync, mkdtempSync, readdirSync, readFileSync } from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
@@ -21,7 +20,8 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { FAKE_S3_KEYS, startFakeS3, type FakeS3 } from '../../fakes/s3';
 import { startFakeSmtp } from '../../fakes/smtp';
-import { freshPostgresDatabase } from '../helpers/postgres';
+import { freshPostgresDatabase, type FreshDatabase } from '../../seed/postgres';
+import { freePort, run } from '../reliability/harness';
 
 const SERVER = process.env.TEST_POSTGRES_URL;
 const BUILD = path.resolve(process.env.BUILD_DIR || 'build');
@@ -30,14 +30,6 @@ const BUCKET = 'journeymark-scale';
 const LOOKUPS_PER_MINUTE = 40;
 const PASSWORD = 'journeymark-demo'; // seed/demo.ts
 const HOLDER = 'Bea Kowalczyk'; // seed/demo.ts: has completed areas to certify
-
-const freePort = () =>
-	new Promise<number>((resolve) => {
-		const server = net.createServer().listen(0, '127.0.0.1', () => {
-			const { port } = server.address() as net.AddressInfo;
-			server.close(() => resolve(port));
-		});
-	});
 
 interface Instance {
 	name: string;
@@ -72,22 +64,8 @@ async function startInstance(name: string, env: NodeJS.ProcessEnv): Promise<Inst
 }
 
 /** Starts the server expecting it to refuse; resolves with its exit code and output. */
-function expectRefusal(env: NodeJS.ProcessEnv) {
-	return new Promise<{ code: number | null; output: string }>((resolve) => {
-		const child = spawn(process.execPath, [BUILD], {
-			env: { ...env, PORT: '0', HOST: '127.0.0.1' },
-			stdio: ['ignore', 'pipe', 'pipe']
-		});
-		let output = '';
-		child.stdout!.on('data', (d) => (output += d));
-		child.stderr!.on('data', (d) => (output += d));
-		const timer = setTimeout(() => child.kill('SIGKILL'), 30_000);
-		child.on('exit', (code) => {
-			clearTimeout(timer);
-			resolve({ code, output });
-		});
-	});
-}
+const expectRefusal = (env: NodeJS.ProcessEnv) =>
+	run(process.execPath, [BUILD], { ...env, PORT: '0', HOST: '127.0.0.1' }, 30_000);
 
 /** A request as a browser behind the proxy sends it: the public origin, and the session cookie. */
 function send(instance: Instance, pathname: string, init: RequestInit & { cookie?: string } = {}) {
@@ -118,7 +96,7 @@ describe.skipIf(!SERVER)('two instances on one PostgreSQL database and one bucke
 	let dir: string;
 	let s3: FakeS3;
 	let mail: Awaited<ReturnType<typeof startFakeSmtp>>;
-	let database: Awaited<ReturnType<typeof freshPostgresDatabase>>;
+	let database: FreshDatabase;
 	let sql: pg.Client;
 	let env: NodeJS.ProcessEnv;
 	let a: Instance;
@@ -333,20 +311,10 @@ describe.skipIf(!SERVER)('two instances on one PostgreSQL database and one bucke
 				)
 				.filter((m) => /^Week of \d{4}-\d{2}-\d{2}: /.test(m.subject)).length;
 		const before = weekly();
-		const job = () =>
-			new Promise<{ code: number | null; output: string }>((resolve) => {
-				const child = spawn(process.execPath, ['--import', 'tsx', 'seed/digest.ts', '--once'], {
-					env,
-					stdio: ['ignore', 'pipe', 'pipe']
-				});
-				let output = '';
-				child.stdout!.on('data', (d) => (output += d));
-				child.stderr!.on('data', (d) => (output += d));
-				child.on('exit', (code) => resolve({ code, output }));
-			});
+		const job = () => run(process.execPath, ['--import', 'tsx', 'seed/digest.ts', '--once'], env);
 		const runs = await Promise.all([job(), job()]);
-		for (const run of runs) expect(run.code, run.output).toBe(0);
-		const said = runs.map((r) => r.output).join('');
+		for (const r of runs) expect(r.code, r.out).toBe(0);
+		const said = runs.map((r) => r.out).join('\n');
 		expect(said).toMatch(/Weekly digest sent to \d+ coordinator/);
 		expect(said).toMatch(/already sent/);
 		const {
@@ -371,7 +339,7 @@ describe.skipIf(!SERVER)('two instances on one PostgreSQL database and one bucke
 		const nowhere = new URL(missing);
 		nowhere.port = '1';
 		for (const url of [missing, nowhere]) {
-			const { code, output } = await expectRefusal({
+			const { code, out: output } = await expectRefusal({
 				...env,
 				DATABASE_URL: url.toString(),
 				KEYS_DIR: keys
@@ -387,7 +355,7 @@ describe.skipIf(!SERVER)('two instances on one PostgreSQL database and one bucke
 		const empty = await freshPostgresDatabase(SERVER!);
 		const keys = path.join(dir, 'refused-keys-2');
 		try {
-			const { code, output } = await expectRefusal({
+			const { code, out: output } = await expectRefusal({
 				...env,
 				DATABASE_URL: empty.url,
 				S3_BUCKET: 'no-such-bucket',
